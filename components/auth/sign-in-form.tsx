@@ -1,0 +1,79 @@
+import { Formik } from 'formik';
+import { StyleSheet, View } from 'react-native';
+import { colors, radius, space } from '@/components/theme';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { Text } from '@/components/ui/text';
+import { TextField } from '@/components/ui/text-field';
+import { BrandMark } from '@/components/nav/brand-mark';
+import { RequestError, errorMessage } from '@/hooks/api/request';
+import { useSignInMutation } from '@/hooks/api/use-auth';
+import { signInSchema, type SignInInput } from '@/shared/schemas/auth';
+
+export function SignInForm() {
+  const signIn = useSignInMutation();
+  return (
+    <View style={styles.wrap}>
+      <View style={styles.brand}>
+        <BrandMark size={48} />
+        <View>
+          <Text variant="heading">Isoledger</Text>
+          <Text muted>Plant register and isolation log</Text>
+        </View>
+      </View>
+      <Formik<SignInInput>
+        initialValues={{ email: '', password: '' }}
+        validationSchema={signInSchema}
+        onSubmit={async (values, { setErrors, setStatus }) => {
+          setStatus(undefined);
+          try {
+            await signIn.mutateAsync(signInSchema.cast(values));
+          } catch (err) {
+            if (err instanceof RequestError && err.fields) setErrors(err.fields);
+            setStatus(errorMessage(err));
+          }
+        }}
+      >
+        {({ handleChange, handleBlur, handleSubmit, values, errors, touched, isSubmitting, status }) => (
+          <View style={styles.card}>
+            <Text variant="title">Sign in</Text>
+            {status ? <Notice tone="danger" word="Not signed in">{status}</Notice> : null}
+            <TextField
+              label="E-mail"
+              value={values.email}
+              onChangeText={handleChange('email')}
+              onBlur={handleBlur('email')}
+              error={touched.email && errors.email}
+              autoCapitalize="none"
+              autoComplete="email"
+              keyboardType="email-address"
+              inputMode="email"
+              testID="sign-in-email"
+            />
+            <TextField
+              label="Password"
+              value={values.password}
+              onChangeText={handleChange('password')}
+              onBlur={handleBlur('password')}
+              error={touched.password && errors.password}
+              secureTextEntry
+              autoComplete="current-password"
+              onSubmitEditing={() => handleSubmit()}
+              testID="sign-in-password"
+            />
+            <Button title="Sign in" onPress={() => handleSubmit()} busy={isSubmitting} testID="sign-in-submit" />
+          </View>
+        )}
+      </Formik>
+      <Notice tone="info" word="Remember">
+        Isoledger records isolations and overrides. It does not isolate anything. Always follow your site's safe isolation procedure.
+      </Notice>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { width: '100%', maxWidth: 440, alignSelf: 'center', gap: space.lg, paddingTop: space.xl },
+  brand: { flexDirection: 'row', alignItems: 'center', gap: space.md },
+  card: { backgroundColor: colors.surface, borderRadius: radius.lg, borderWidth: 1, borderColor: colors.line, padding: space.xl, gap: space.sm },
+});

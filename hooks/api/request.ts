@@ -1,0 +1,62 @@
+import type { ApiErrorBody } from '@/shared/types/user';
+
+/** An API failure in a form people can read; `fields` maps form fields to messages. */
+export class RequestError extends Error {
+  constructor(
+    public readonly status: number,
+    public readonly code: string,
+    message: string,
+    public readonly fields?: Record<string, string>,
+  ) {
+    super(message);
+    this.name = 'RequestError';
+  }
+}
+
+let token: string | null = null;
+let onUnauthenticated: (() => void) | null = null;
+
+export const setRequestToken = (value: string | null) => { token = value; };
+export const setUnauthenticatedHandler = (fn: (() => void) | null) => { onUnauthenticated = fn; };
+
+// Same origin on the web; a native build points at the server with EXPO_PUBLIC_API_URL.
+const BASE = process.env.EXPO_PUBLIC_API_URL ?? '';
+
+export interface RequestOptions {
+  method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+  body?: unknown;
+  headers?: Record<string, string>;
+  /** Return the raw Response (files, CSV) instead of parsed JSON. */
+  raw?: boolean;
+}
+
+/** The only place the client calls fetch. */
+export async function request<T>(path: string, opts: RequestOptions = {}): Promise<T> {
+  const headers: Record<string, string> = { Accept: 'application/json', ...opts.headers };
+  if (token) headers.Authorization = `Bearer ${token}`;
+  let body: BodyInit | undefined;
+  if (opts.body instanceof FormData) body = opts.body;
+  else if (opts.body !== undefined) {
+    headers['Content-Type'] = 'application/json';
+    body = JSON.stringify(opts.body);
+  }
+  let res: Response;
+  try {
+    res = await fetch(`${BASE}/api${path}`, { method: opts.method ?? 'GET', headers, body });
+  } catch {
+    throw new RequestError(0, 'offline', 'Cannot reach the Isoledger server. Check your connection and try again.');
+  }
+  if (res.status === 401 && token && !path.startsWith('/auth/login')) onUnauthenticated?.();
+  if (!res.ok) {
+    let parsed: ApiErrorBody | null = null;
+    try { parsed = (await res.json()) as ApiErrorBody; } catch { /* not JSON */ }
+    const e = parsed?.error;
+    throw new RequestError(res.status, e?.code ?? 'http-error', e?.message ?? `The server answered ${res.status}.`, e?.fields);
+  }
+  if (opts.raw) return res as unknown as T;
+  if (res.status === 204) return undefined as T;
+  return (await res.json()) as T;
+}
+
+export const errorMessage = (err: unknown) =>
+  err instanceof RequestError ? err.message : err instanceof Error ? err.message : 'Something went wrong.';

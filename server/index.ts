@@ -1,0 +1,27 @@
+import type { Server } from 'node:http';
+import { createApp } from '@/server/app';
+import type { ServerConfig } from '@/server/config';
+import { createSequelize, migrate } from '@/server/db';
+import { logger } from '@/server/lib/logger';
+
+/** Connects, migrates and listens on 127.0.0.1 (or HOST). Returns a function that closes everything. */
+export async function startServer(config: ServerConfig, databaseUrl: string): Promise<{ server: Server; close: () => Promise<void> }> {
+  const sequelize = createSequelize(databaseUrl);
+  await sequelize.authenticate();
+  await migrate(sequelize);
+  const app = createApp({ sequelize, config });
+  const host = process.env.HOST ?? '127.0.0.1';
+  const server = await new Promise<Server>((resolve, reject) => {
+    const s = app.listen(config.port, host, () => resolve(s));
+    s.once('error', reject);
+  });
+  logger.info({ port: config.port, host }, 'server listening');
+  return {
+    server,
+    close: async () => {
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      server.closeAllConnections?.();
+      await sequelize.close();
+    },
+  };
+}

@@ -1,0 +1,69 @@
+import type { RequestHandler } from 'express';
+import jwt from 'jsonwebtoken';
+import type { Role } from '@/shared/rules/roles';
+import { HttpError, forbidden } from '@/server/lib/http-error';
+import { User } from '@/server/models/user.model';
+
+export interface AuthUser {
+  id: number;
+  organisationId: number;
+  role: Role;
+  name: string;
+  email: string;
+}
+
+declare module 'express-serve-static-core' {
+  interface Request {
+    user?: AuthUser;
+  }
+}
+
+export interface TokenClaims {
+  sub: string;
+  org: number;
+  ver: number;
+}
+
+const unauthenticated = (message = 'Please sign in.') => new HttpError(401, 'unauthenticated', message);
+
+/**
+ * Checks the bearer token, then the user row on every request, so a signed-out (token version raised)
+ * or deactivated user is refused at once, not when the token expires.
+ */
+export const auth =
+  (jwtSecret: string): RequestHandler =>
+  async (req, _res, next) => {
+    try {
+      const header = req.get('authorization') ?? '';
+      const match = /^Bearer\s+(.+)$/i.exec(header);
+      if (!match) throw unauthenticated();
+      let claims: TokenClaims;
+      try {
+        claims = jwt.verify(match[1], jwtSecret, { algorithms: ['HS256'] }) as unknown as TokenClaims;
+      } catch (err) {
+        throw unauthenticated(err instanceof jwt.TokenExpiredError ? 'Your session has expired. Please sign in again.' : 'Please sign in.');
+      }
+      const user = await User.findByPk(Number(claims.sub));
+      if (!user || !user.active || user.tokenVersion !== claims.ver || user.organisationId !== claims.org) {
+        throw unauthenticated('Your session has ended. Please sign in again.');
+      }
+      req.user = { id: user.id, organisationId: user.organisationId, role: user.role, name: user.name, email: user.email };
+      next();
+    } catch (err) {
+      next(err);
+    }
+  };
+
+export const requireRole =
+  (...roles: Role[]): RequestHandler =>
+  (req, _res, next) => {
+    if (!req.user) return next(unauthenticated());
+    if (!roles.includes(req.user.role)) return next(forbidden());
+    next();
+  };
+
+/** The signed-in user; only call behind `auth`. */
+export function currentUser(req: { user?: AuthUser }): AuthUser {
+  if (!req.user) throw unauthenticated();
+  return req.user;
+}
