@@ -12,5 +12,7 @@ export default defineConfig({
     pool: 'forks',
     maxWorkers: 1,
     fileParallelism: false,
+    globalSetup: ['test/e2e/support/global-app.ts'],
+    env: { NODE_ENV: 'test' },
   },
 });

@@ -13,7 +13,7 @@ export interface ServerConfig {
   bcryptCost: number;
 }
 
-export function readConfig(env: NodeJS.ProcessEnv = process.env, overrides: Partial<ServerConfig> = {}): ServerConfig {
+export function readConfig(env: Record<string, string | undefined> = process.env, overrides: Partial<ServerConfig> = {}): ServerConfig {
   const port = Number(env.PORT ?? 8080);
   const dataDir = path.resolve(env.DATA_DIR ?? '.data');
   return {

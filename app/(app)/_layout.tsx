@@ -1,4 +1,5 @@
-import { Redirect, Slot, usePathname } from 'expo-router';
+import { Slot, usePathname, useRouter } from 'expo-router';
+import { useEffect } from 'react';
 import { AppShell } from '@/components/nav/app-shell';
 import { Button } from '@/components/ui/button';
 import { LoadingView } from '@/components/ui/loading-view';
@@ -12,11 +13,14 @@ export default function AppLayout() {
   const { ready, token } = useAuth();
   const pathname = usePathname();
   const me = useMeQuery();
-  if (!ready) return <LoadingView />;
-  if (!token) {
-    const params = pathname && pathname !== "/" ? { next: pathname } : {};
-    return <Redirect href={{ pathname: "/sign-in", params }} />;
-  }
+  const router = useRouter();
+  const signedOut = ready && !token;
+  useEffect(() => {
+    if (!signedOut) return;
+    // Come back here after signing in (a label link opened while signed out, a hard refresh).
+    router.replace({ pathname: '/sign-in', params: pathname && pathname !== '/' ? { next: pathname } : {} });
+  }, [signedOut, pathname, router]);
+  if (!ready || signedOut) return <LoadingView />;
   if (me.isPending) return <LoadingView />;
   if (me.isError) {
     return (

@@ -45,7 +45,7 @@ export function HomeContent({ user }: { user: User }) {
       <View style={[styles.grid, isWide && styles.gridWide]}>
         {actions.map((a) => (
           <Link key={a.href} href={a.href as never} asChild>
-            <Pressable style={[styles.tile, isWide && styles.tileWide]} accessibilityRole="link">
+            <Pressable style={StyleSheet.flatten([styles.tile, isWide && styles.tileWide])} accessibilityRole="link">
               <MaterialCommunityIcons name={a.icon} size={32} color={colors.brand} />
               <View style={{ flex: 1 }}>
                 <Text bold>{a.title}</Text>

@@ -30,7 +30,7 @@ export function AppShell({ user, children }: { user: User; children: ReactNode }
             const active = isActive(pathname, item.href);
             return (
               <Link key={item.href} href={item.href as never} asChild>
-                <Pressable style={[styles.sideItem, active && styles.sideItemActive]} accessibilityRole="link" accessibilityState={{ selected: active }}>
+                <Pressable style={StyleSheet.flatten([styles.sideItem, active && styles.sideItemActive])} accessibilityRole="link" accessibilityState={{ selected: active }}>
                   <MaterialCommunityIcons name={item.icon} size={24} color={active ? colors.ink : colors.paper} />
                   <Text bold={active} style={{ color: active ? colors.ink : colors.paper }}>{item.label}</Text>
                 </Pressable>
@@ -51,12 +51,12 @@ export function AppShell({ user, children }: { user: User; children: ReactNode }
   return (
     <View style={{ flex: 1, backgroundColor: colors.paper }}>
       <View style={{ flex: 1 }}>{children}</View>
-      <View style={[styles.tabs, { paddingBottom: Math.max(insets.bottom, space.xs) }]} accessibilityRole="tablist">
+      <View style={[styles.tabs, { paddingBottom: Math.max(insets.bottom, space.xs) }]} role="navigation">
         {items.map((item) => {
           const active = isActive(pathname, item.href);
           return (
             <Link key={item.href} href={item.href as never} asChild>
-              <Pressable style={styles.tab} accessibilityRole="tab" accessibilityState={{ selected: active }} accessibilityLabel={item.label}>
+              <Pressable style={styles.tab} accessibilityRole="link" accessibilityState={{ selected: active }} accessibilityLabel={item.label}>
                 <View style={[styles.tabIcon, active && styles.tabIconActive]}>
                   <MaterialCommunityIcons name={item.icon} size={24} color={active ? colors.ink : colors.paper} />
                 </View>

@@ -55,6 +55,7 @@ export async function startPrivateMariaDb(opts: { dataDir: string; port: number;
     const result = spawnSync(findBinary('mariadb-install-db'), args, { encoding: 'utf8' });
     if (result.status !== 0) throw new Error(`mariadb-install-db failed:\n${result.stdout}\n${result.stderr}`);
   }
+  await stopLeftoverServer(dataDir, log);
   if (await portInUse(opts.port)) {
     throw new Error(`port ${opts.port} on 127.0.0.1 is already in use; set DB_PORT to a free port`);
   }
@@ -74,7 +75,8 @@ export async function startPrivateMariaDb(opts: { dataDir: string; port: number;
     '--innodb-flush-log-at-trx-commit=2',
   ];
   if (isRoot) args.push('--user=root');
-  const child: ChildProcess = spawn(findBinary('mariadbd'), args, { stdio: 'ignore', detached: false });
+  // Its own process group, so a Ctrl-C in the terminal reaches only our process, which then stops it in order.
+  const child: ChildProcess = spawn(findBinary('mariadbd'), args, { stdio: 'ignore', detached: true });
   let exited = false;
   child.once('exit', () => { exited = true; });
   const rootUrl = `mariadb://root@127.0.0.1:${opts.port}/`;
@@ -106,6 +108,20 @@ export async function startPrivateMariaDb(opts: { dataDir: string; port: number;
         child.once('exit', () => clearTimeout(timer));
       }),
   };
+}
+
+/** A server left running on this data folder (say, after a crash of the process that started it) is stopped first. */
+async function stopLeftoverServer(dataDir: string, log: (line: string) => void) {
+  const pidFile = path.join(dataDir, 'mariadbd.pid');
+  if (!fs.existsSync(pidFile)) return;
+  const pid = Number(fs.readFileSync(pidFile, 'utf8').trim());
+  const alive = (p: number) => { try { process.kill(p, 0); return true; } catch { return false; } };
+  if (!pid || !alive(pid)) return;
+  const cmdline = fs.existsSync(`/proc/${pid}/cmdline`) ? fs.readFileSync(`/proc/${pid}/cmdline`, 'utf8') : '';
+  if (!cmdline.includes('mariadbd') || !cmdline.includes(dataDir)) return;
+  log(`stopping a MariaDB left running on ${dataDir} (pid ${pid})`);
+  process.kill(pid, 'SIGTERM');
+  for (let i = 0; i < 300 && alive(pid); i++) await new Promise((r) => setTimeout(r, 100));
 }
 
 /** Runs statements as root on the private server. */

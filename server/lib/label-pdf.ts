@@ -24,16 +24,9 @@ export const QUIET_ZONE_MODULES = 4;
 export const MIN_MODULE_MM = 0.5;
 
 export interface LayoutGeometry {
-  pageWidthMm: number;
-  pageHeightMm: number;
-  columns: number;
-  rows: number;
-  labelWidthMm: number;
-  labelHeightMm: number;
-  leftMarginMm: number;
-  topMarginMm: number;
-  horizontalPitchMm: number;
-  verticalPitchMm: number;
+  pageWidthMm: number; pageHeightMm: number; columns: number; rows: number;
+  labelWidthMm: number; labelHeightMm: number; leftMarginMm: number; topMarginMm: number;
+  horizontalPitchMm: number; verticalPitchMm: number;
   /** Clear band kept inside each label's die-cut edge, for printer registration and cutting tolerance. */
   paddingMm: number;
   /** Largest side of the QR square (symbol plus quiet zone); the rest of the width is for text. */
@@ -61,14 +54,8 @@ export const LAYOUTS: Record<LabelLayout, LayoutGeometry> = { sheet: SHEET_GEOME
 
 /** Position of one label, in mm from the top-left corner of its page. */
 export interface LabelRect {
-  index: number;
-  page: number;
-  row: number;
-  column: number;
-  xMm: number;
-  yMm: number;
-  widthMm: number;
-  heightMm: number;
+  index: number; page: number; row: number; column: number;
+  xMm: number; yMm: number; widthMm: number; heightMm: number;
 }
 
 export function labelRects(count: number, layout: LabelLayout): LabelRect[] {
@@ -109,7 +96,7 @@ export interface QrPlan {
  * for Q at the minimum module size falls back to M (about 15 %). Below M, or below 0.5 mm, we refuse.
  */
 export function planQr(url: string, squareMm: number): QrPlan {
-  for (const level of ['L', 'M'] as const) {
+  for (const level of ['Q', 'M'] as const) {
     const symbol = QRCode.create(url, { errorCorrectionLevel: level });
     const moduleMm = squareMm / (symbol.modules.size + 2 * QUIET_ZONE_MODULES);
     if (moduleMm >= MIN_MODULE_MM) return { symbol, level, moduleMm };

@@ -1,0 +1,42 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import type { TestProject } from 'vitest/node';
+import { createApp } from '@/server/app';
+import { readConfig } from '@/server/config';
+import { createSequelize, migrate } from '@/server/db';
+import { seedDemo } from '@/server/seed/demo';
+import { asRoot, freePort, startPrivateMariaDb } from '@/scripts/lib/mariadb';
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    baseUrl: string;
+  }
+}
+
+/** The product as `npm start` runs it — demo data, built web app — on a throwaway MariaDB and a free port. */
+export default async function setup(project: TestProject) {
+  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'isoledger-e2e-'));
+  const dbPort = await freePort();
+  const db = await startPrivateMariaDb({ dataDir: path.join(dataDir, 'mariadb'), port: dbPort });
+  await asRoot(dbPort, ['CREATE DATABASE isoledger CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci']);
+  const sequelize = createSequelize(`mariadb://root@127.0.0.1:${dbPort}/isoledger`);
+  await migrate(sequelize);
+  await seedDemo(sequelize);
+  const port = await freePort();
+  const baseUrl = `http://127.0.0.1:${port}`;
+  const config = readConfig({ PORT: String(port), DATA_DIR: dataDir }, { jwtSecret: 'e2e-secret', publicUrl: baseUrl });
+  if (!fs.existsSync(path.join(config.webDir!, 'index.html'))) throw new Error('dist/index.html is missing: build the web app first (npm test does)');
+  const app = createApp({ sequelize, config });
+  const server = await new Promise<import('node:http').Server>((resolve) => {
+    const s = app.listen(port, '127.0.0.1', () => resolve(s));
+  });
+  project.provide('baseUrl', baseUrl);
+  return async () => {
+    server.closeAllConnections();
+    await new Promise((r) => server.close(r));
+    await sequelize.close();
+    await db.stop();
+    fs.rmSync(dataDir, { recursive: true, force: true });
+  };
+}
