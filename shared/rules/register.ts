@@ -1,0 +1,43 @@
+/** Plant item types, energy sources and their labels: the register's vocabulary, shared by client and server. */
+export const ASSET_TYPES = ['boiler', 'pump', 'actuator', 'valve', 'vessel', 'pressurisation-unit', 'water-heater', 'control-panel', 'terminal-unit', 'other'] as const;
+export type AssetType = (typeof ASSET_TYPES)[number];
+
+export const ASSET_TYPE_LABELS: Record<AssetType, string> = {
+  boiler: 'Boiler',
+  pump: 'Pump',
+  actuator: 'Actuator',
+  valve: 'Valve',
+  vessel: 'Expansion vessel',
+  'pressurisation-unit': 'Pressurisation unit',
+  'water-heater': 'Water heater / calorifier',
+  'control-panel': 'Control panel',
+  'terminal-unit': 'Fan coil / terminal unit',
+  other: 'Other',
+};
+
+export const ENERGY_SOURCES = ['gas', 'electrical', 'stored-pressure', 'hot-water', 'mechanical', 'chemical'] as const;
+export type EnergySource = (typeof ENERGY_SOURCES)[number];
+
+export const ENERGY_SOURCE_LABELS: Record<EnergySource, string> = {
+  gas: 'Gas',
+  electrical: 'Electrical',
+  'stored-pressure': 'Stored pressure',
+  'hot-water': 'Hot water or steam',
+  mechanical: 'Mechanical / rotating',
+  chemical: 'Chemical',
+};
+
+/** Next service date = last service + interval (months); overdue when that date is before today. */
+export function nextServiceDue(lastServiceDate: string | null, intervalMonths: number | null): string | null {
+  if (!lastServiceDate || !intervalMonths) return null;
+  const [y, m, d] = lastServiceDate.split('-').map(Number);
+  const target = new Date(Date.UTC(y, m - 1 + intervalMonths, 1));
+  // Clamp to the month's last day (31 Jan + 1 month → 28/29 Feb).
+  const lastDay = new Date(Date.UTC(target.getUTCFullYear(), target.getUTCMonth() + 1, 0)).getUTCDate();
+  target.setUTCDate(Math.min(d, lastDay));
+  return target.toISOString().slice(0, 10);
+}
+
+export function isServiceOverdue(nextDue: string | null, today: string): boolean {
+  return !!nextDue && nextDue < today;
+}

@@ -1,0 +1,98 @@
+import type { AssetType, EnergySource } from '@/shared/rules/register';
+
+export interface Site {
+  id: number;
+  name: string;
+  address: string;
+  timeZone: string;
+  clientContactName: string | null;
+  clientContactPhone: string | null;
+  clientContactEmail: string | null;
+  plantRoomCount: number;
+  assetCount: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface SafetyLocations {
+  emergencyStop: string;
+  gasIsolation: string;
+  electricalIsolator: string;
+  firstAid: string;
+  exits: string;
+}
+
+export interface Photo {
+  id: number;
+  /** Authenticated URLs under /api/photos/:id; fetch with the bearer token. */
+  url: string;
+  thumbnailUrl: string;
+  width: number;
+  height: number;
+  caption: string | null;
+  createdAt: string;
+  createdBy: { id: number; name: string };
+}
+
+export interface PlantRoom {
+  id: number;
+  siteId: number;
+  siteName: string;
+  name: string;
+  floorArea: string;
+  accessNotes: string;
+  safety: SafetyLocations;
+  assetCount: number;
+  photos: Photo[];
+  createdBy: { id: number; name: string };
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** Type-specific fields; which keys apply depends on the asset type (see shared/schemas/register.ts). */
+export type AssetAttributes = Record<string, string | number | boolean | null>;
+
+export interface Asset {
+  id: number;
+  siteId: number;
+  siteName: string;
+  plantRoomId: number | null;
+  plantRoomName: string | null;
+  plantId: string;
+  labelCode: string;
+  name: string;
+  type: AssetType;
+  system: string;
+  energySources: EnergySource[];
+  manufacturer: string;
+  model: string;
+  serialNumber: string;
+  installDate: string | null;
+  serviceIntervalMonths: number | null;
+  lastServiceDate: string | null;
+  nextServiceDue: string | null;
+  serviceOverdue: boolean;
+  notes: string;
+  attributes: AssetAttributes;
+  archived: boolean;
+  photos?: Photo[];
+  thumbnailUrl: string | null;
+  createdBy: { id: number; name: string };
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface ImportRowError {
+  /** Spreadsheet row number, counting the header as row 1. */
+  row: number;
+  column: string;
+  message: string;
+}
+
+export interface ImportResult {
+  dryRun: boolean;
+  rows: number;
+  created: number;
+  updated: number;
+  errors: ImportRowError[];
+}
