@@ -5,6 +5,7 @@ import { startServer } from '@/server/index';
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '@/server/seed/demo';
 import { readOrCreateSecret, startLocalDatabase } from '@/scripts/lib/local-db';
 import { buildWebIfChanged } from '@/scripts/lib/web-build';
+import { startLocalMailServer } from '@/scripts/lib/maildev';
 
 const say = (line: string) => console.log(`[isoledger] ${line}`);
 
@@ -40,6 +41,16 @@ async function main() {
     await sequelize.close();
 
     await buildWebIfChanged(say);
+    // A local fake mail server catches every e-mail in development, unless SMTP_HOST points somewhere else.
+    if (['127.0.0.1', 'localhost'].includes(config.mail.host)) {
+      try {
+        const mail = await startLocalMailServer({ smtpPort: config.mail.port, webPort: config.mail.maildevWebPort });
+        stops.push(mail.stop);
+        say(`fake mail server on 127.0.0.1:${mail.smtpPort}; read the mail at http://127.0.0.1:${mail.webPort}`);
+      } catch (err) {
+        say(`could not start the fake mail server (${(err as Error).message}); carrying on without it, mail waits in the outbox`);
+      }
+    }
     const running = await startServer(config, databaseUrl);
     stops.push(running.close);
 

@@ -8,16 +8,33 @@ import type { ServerConfig } from '@/server/config';
 import { logger } from '@/server/lib/logger';
 import { errorHandler, notFoundApi } from '@/server/middleware/error-handler';
 import { authRoutes } from '@/server/routes/auth.routes';
+import { calcRoutes } from '@/server/routes/calc.routes';
+import { heatingSystemsRoutes } from '@/server/routes/heating-systems.routes';
+import { readingsRoutes } from '@/server/routes/readings.routes';
 import { healthRoutes } from '@/server/routes/health.routes';
+import { labelsRoutes } from '@/server/routes/labels.routes';
+import { tagsRoutes } from '@/server/routes/tags.routes';
 import { usersRoutes } from '@/server/routes/users.routes';
+import { createPhotoStorage } from '@/server/lib/create-photo-storage';
+import type { PhotoStorage } from '@/server/lib/photo-storage';
+import { assetsRoutes } from '@/server/routes/assets.routes';
+import { photosRoutes } from '@/server/routes/photos.routes';
+import { plantRoomsRoutes } from '@/server/routes/plant-rooms.routes';
+import { sitesRoutes } from '@/server/routes/sites.routes';
+import { boardRoutes } from '@/server/routes/board.routes';
+import { teamRoutes } from '@/server/routes/team.routes';
+import { accountRoutes } from '@/server/routes/account.routes';
 
 export interface AppContext {
   sequelize: Sequelize;
   config: ServerConfig;
+  /** Photo files; made from config.storage when not given. */
+  storage?: PhotoStorage;
 }
 
 /** Builds the Express app; never listens (server/index.ts does). */
 export function createApp(ctx: AppContext) {
+  ctx = { ...ctx, storage: ctx.storage ?? createPhotoStorage(ctx.config) };
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -45,13 +62,32 @@ export function createApp(ctx: AppContext) {
       strictTransportSecurity: false,
     }),
   );
-  if (process.env.NODE_ENV !== 'test') app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  if (process.env.NODE_ENV !== 'test') app.use(
+      pinoHttp({
+        logger,
+        autoLogging: { ignore: (req) => req.url === '/api/health' },
+        // One short line per request: no headers, so no tokens in the log.
+        serializers: { req: (req) => ({ method: req.method, url: req.url }), res: (res) => ({ statusCode: res.statusCode }) },
+      }),
+    );
 
   const api = express.Router();
   api.use(express.json({ limit: '256kb' }));
   api.use(healthRoutes(ctx));
   api.use(authRoutes(ctx));
   api.use(usersRoutes(ctx));
+  api.use(sitesRoutes(ctx));
+  api.use(plantRoomsRoutes(ctx));
+  api.use(assetsRoutes(ctx));
+  api.use(photosRoutes(ctx));
+  api.use(calcRoutes(ctx));
+  api.use(readingsRoutes(ctx));
+  api.use(heatingSystemsRoutes(ctx));
+  api.use(labelsRoutes(ctx));
+  api.use(tagsRoutes(ctx));
+  api.use(boardRoutes(ctx));
+  api.use(teamRoutes(ctx));
+  api.use(accountRoutes(ctx));
   api.use(notFoundApi);
   app.use('/api', api);
 

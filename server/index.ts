@@ -3,6 +3,7 @@ import { createApp } from '@/server/app';
 import type { ServerConfig } from '@/server/config';
 import { createSequelize, migrate } from '@/server/db';
 import { logger } from '@/server/lib/logger';
+import { startMailJobs } from '@/server/mail/mail-jobs';
 
 /** Connects, migrates and listens on 127.0.0.1 (or HOST). Returns a function that closes everything. */
 export async function startServer(config: ServerConfig, databaseUrl: string): Promise<{ server: Server; close: () => Promise<void> }> {
@@ -16,11 +17,14 @@ export async function startServer(config: ServerConfig, databaseUrl: string): Pr
     s.once('error', reject);
   });
   logger.info({ port: config.port, host }, 'server listening');
+  // The outbox worker and the morning digest run in every server process; the database keeps them from doubling up.
+  const stopMailJobs = startMailJobs(sequelize, config);
   return {
     server,
     close: async () => {
       await new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections?.();
+      await stopMailJobs();
       await sequelize.close();
     },
   };

@@ -19,4 +19,10 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/settings', label: 'Settings', icon: 'account-cog-outline', roles: everyone },
 ];
 
-export const isActive = (pathname: string, href: string) => (href === '/' ? pathname === '/' : pathname === href || pathname.startsWith(`${href}/`));
+// Screens that belong to a tab without living under its path (the register's sites and plant rooms).
+const ALSO_UNDER: Record<string, string[]> = { '/assets': ['/sites', '/plant-rooms'] };
+
+const under = (pathname: string, href: string) => pathname === href || pathname.startsWith(`${href}/`);
+
+export const isActive = (pathname: string, href: string) =>
+  href === '/' ? pathname === '/' : under(pathname, href) || (ALSO_UNDER[href] ?? []).some((h) => under(pathname, h));

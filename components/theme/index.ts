@@ -22,6 +22,8 @@ export const colors = {
   mandatorySoft: '#e1ebf8',
   safe: '#2e7d32',
   safeSoft: '#e2f1e3',
+  /** Dims the screen behind a dialog. */
+  scrim: 'rgba(20, 50, 61, 0.6)',
 } as const;
 
 export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32, xxxl: 48 } as const;

@@ -58,5 +58,15 @@ export async function request<T>(path: string, opts: RequestOptions = {}): Promi
   return (await res.json()) as T;
 }
 
+/**
+ * An authenticated file (photo, CSV) as a Blob. `url` is the address the API hands out, e.g. `/api/photos/7`;
+ * such files need the bearer token, so an <img src> or a plain link cannot load them.
+ */
+export async function fetchBlob(url: string): Promise<Blob> {
+  if (!url.startsWith('/api/')) throw new RequestError(0, 'bad-url', 'That file is not served by Isoledger.');
+  const res = await request<Response>(url.slice('/api'.length), { raw: true, headers: { Accept: '*/*' } });
+  return res.blob();
+}
+
 export const errorMessage = (err: unknown) =>
   err instanceof RequestError ? err.message : err instanceof Error ? err.message : 'Something went wrong.';

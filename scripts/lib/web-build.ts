@@ -2,11 +2,12 @@ import { spawnSync } from 'node:child_process';
 import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
+import { copyZxingWasm } from '@/scripts/lib/zxing-wasm';
 
 const ROOT = path.resolve(__dirname, '../..');
 const DIST = path.join(ROOT, 'dist');
 const STAMP = path.join(DIST, '.source-hash');
-const SOURCES = ['app', 'components', 'hooks', 'shared', 'assets', 'app.json', 'package-lock.json', 'metro.config.js', 'babel.config.js', 'scripts/lib/web-build.ts'];
+const SOURCES = ['app', 'components', 'hooks', 'shared', 'assets', 'app.json', 'package-lock.json', 'metro.config.js', 'babel.config.js', 'scripts/lib/web-build.ts', 'scripts/lib/zxing-wasm.ts'];
 
 function hashTree(hash: crypto.Hash, target: string) {
   if (!fs.existsSync(target)) return;
@@ -40,8 +41,13 @@ export function buildWeb(log: (line: string) => void) {
   log(`web app built in ${((Date.now() - started) / 1000).toFixed(1)} s`);
 }
 
-/** Hook for build steps that run after expo export (the scanner's wasm is copied here). */
-function afterExport(_dist: string) {}
+/**
+ * The web scanner's QR reader (barcode-detector → zxing-wasm) would fetch its .wasm from a public CDN; we copy the
+ * exact installed binary into the build and the app points the library at it (components/labels/zxing-setup.web.ts).
+ */
+function afterExport(dist: string) {
+  copyZxingWasm(path.join(dist, 'wasm'));
+}
 
 export async function buildWebIfChanged(log: (line: string) => void) {
   const current = sourceHash();

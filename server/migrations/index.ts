@@ -1,5 +1,10 @@
 import type { QueryInterface } from 'sequelize';
 import { foundation } from './0001-foundation';
+import { register } from './0002-register';
+import { readings } from './0003-readings';
+import { tags } from './0004-tags';
+import { labels } from './0005-labels';
+import { notifications } from './0006-notifications';
 
 export interface Migration {
   name: string;
@@ -8,4 +13,4 @@ export interface Migration {
 }
 
 /** Every migration, in order. A new migration is a new file here, never an edit to an applied one. */
-export const migrations: Migration[] = [foundation];
+export const migrations: Migration[] = [foundation, register, readings, tags, labels, notifications];

@@ -2,6 +2,11 @@ import type { Sequelize } from 'sequelize';
 import { Organisation } from '@/server/models/organisation.model';
 import { User } from '@/server/models/user.model';
 import { hashPassword } from '@/server/services/auth.service';
+import { readConfig } from '@/server/config';
+import { createPhotoStorage } from '@/server/lib/create-photo-storage';
+import type { PhotoStorage } from '@/server/lib/photo-storage';
+import { seedDemoRegister } from '@/server/seed/demo-register';
+import { seedDemoReadings } from '@/server/seed/demo-readings';
 import type { Role } from '@/shared/rules/roles';
 
 export const DEMO_PASSWORD = 'isoledger-demo';
@@ -16,16 +21,31 @@ export const DEMO_USERS: { email: string; name: string; role: Role; phone: strin
   { email: 'viewer@example.test', name: 'Odile Penhaligon', role: 'viewer', phone: '+44 7700 900105' },
 ];
 
-/** Seeds the demo organisation once; returns false when it was already there. */
-export async function seedDemo(sequelize: Sequelize, opts: { bcryptCost?: number } = {}): Promise<boolean> {
+/**
+ * Seeds the demo organisation once; returns false when it was already there. The demo register (sites,
+ * plant rooms, items, photos) is seeded with it, or on its own into an organisation seeded before the
+ * register existed. Photos go to `opts.storage`, by default the storage configured by the environment.
+ */
+export async function seedDemo(sequelize: Sequelize, opts: { bcryptCost?: number; storage?: PhotoStorage } = {}): Promise<boolean> {
   return sequelize.transaction(async (transaction) => {
+    const storage = opts.storage ?? createPhotoStorage(readConfig());
+    const register = async (organisationId: number) => {
+      const users = await User.findAll({ where: { organisationId }, transaction });
+      const byEmail = (email: string) => users.find((u) => u.email === email)!;
+      const authors = { supervisor: byEmail('supervisor@example.test'), engineer: byEmail('engineer@example.test'), engineer2: byEmail('engineer2@example.test') };
+      if (!authors.supervisor || !authors.engineer || !authors.engineer2) return false;
+      const seeded = await seedDemoRegister({ organisationId, authors, storage, transaction });
+      await seedDemoReadings({ organisationId, authors, transaction });
+      return seeded;
+    };
     const existing = await Organisation.findOne({ where: { name: DEMO_ORGANISATION }, transaction, lock: transaction.LOCK.UPDATE });
-    if (existing) return false;
+    if (existing) return register(existing.id);
     const organisation = await Organisation.create({ name: DEMO_ORGANISATION }, { transaction });
     const passwordHash = await hashPassword(DEMO_PASSWORD, opts.bcryptCost ?? 10);
     for (const u of DEMO_USERS) {
       await User.create({ ...u, organisationId: organisation.id, passwordHash }, { transaction });
     }
+    await register(organisation.id);
     return true;
   });
 }

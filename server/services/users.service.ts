@@ -3,18 +3,10 @@ import { AuditEvent } from '@/server/models/audit-event.model';
 import { User } from '@/server/models/user.model';
 import type { AuthUser } from '@/server/middleware/auth';
 import type { ListResponse } from '@/shared/types/user';
-import type { Role } from '@/shared/rules/roles';
+import { teamMembers } from '@/server/services/team.service';
+import type { TeamMember } from '@/shared/types/team';
 
-export interface TeamMember {
-  id: number;
-  name: string;
-  email: string;
-  role: Role;
-  active: boolean;
-  phone: string | null;
-}
-
-const toMember = (u: User): TeamMember => ({ id: u.id, name: u.name, email: u.email, role: u.role, active: u.active, phone: u.phone ?? null });
+export type { TeamMember };
 
 export async function listUsers(actor: AuthUser, paging: { page: number; pageSize: number; offset: number }): Promise<ListResponse<TeamMember>> {
   const { rows, count } = await User.findAndCountAll({
@@ -23,7 +15,7 @@ export async function listUsers(actor: AuthUser, paging: { page: number; pageSiz
     limit: paging.pageSize,
     offset: paging.offset,
   });
-  return { items: rows.map(toMember), total: count, page: paging.page, pageSize: paging.pageSize };
+  return { items: await teamMembers(rows), total: count, page: paging.page, pageSize: paging.pageSize };
 }
 
 /** Another organisation's user is answered exactly like a missing one. */
@@ -31,7 +23,7 @@ export async function getUser(actor: AuthUser, id: number): Promise<TeamMember> 
   if (!Number.isSafeInteger(id)) throw new HttpError(400, 'bad-id', 'The id must be a number.');
   const user = await User.findOne({ where: { id, organisationId: actor.organisationId } });
   if (!user) throw notFound('User');
-  return toMember(user);
+  return (await teamMembers([user]))[0];
 }
 
 export interface AuditEntry {

@@ -27,15 +27,20 @@ export const ENERGY_SOURCE_LABELS: Record<EnergySource, string> = {
   chemical: 'Chemical',
 };
 
-/** Next service date = last service + interval (months); overdue when that date is before today. */
-export function nextServiceDue(lastServiceDate: string | null, intervalMonths: number | null): string | null {
-  if (!lastServiceDate || !intervalMonths) return null;
-  const [y, m, d] = lastServiceDate.split('-').map(Number);
-  const target = new Date(Date.UTC(y, m - 1 + intervalMonths, 1));
+/** A YYYY-MM-DD date moved by whole calendar months (negative = back), clamped to the month's last day. */
+export function addMonths(date: string, months: number): string {
+  const [y, m, d] = date.split('-').map(Number);
+  const target = new Date(Date.UTC(y, m - 1 + months, 1));
   // Clamp to the month's last day (31 Jan + 1 month → 28/29 Feb).
   const lastDay = new Date(Date.UTC(target.getUTCFullYear(), target.getUTCMonth() + 1, 0)).getUTCDate();
   target.setUTCDate(Math.min(d, lastDay));
   return target.toISOString().slice(0, 10);
+}
+
+/** Next service date = last service + interval (months); overdue when that date is before today. */
+export function nextServiceDue(lastServiceDate: string | null, intervalMonths: number | null): string | null {
+  if (!lastServiceDate || !intervalMonths) return null;
+  return addMonths(lastServiceDate, intervalMonths);
 }
 
 export function isServiceOverdue(nextDue: string | null, today: string): boolean {

@@ -4,9 +4,20 @@ import { ASSET_TYPES, ENERGY_SOURCES, type AssetType } from '@/shared/rules/regi
 const text = (max: number) => yup.string().trim().max(max, `At most ${max} characters.`).default('');
 const optionalNumber = (min: number, max: number, unit: string) =>
   yup.number().typeError('Enter a number.').min(min, `At least ${min} ${unit}.`).max(max, `At most ${max} ${unit}.`).nullable().default(null);
+/** A real calendar date: 2024-02-30 matches the pattern but is not a day. */
+const isCalendarDate = (v: string) => {
+  const [y, m, d] = v.split('-').map(Number);
+  const date = new Date(Date.UTC(y, m - 1, d));
+  return date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d;
+};
 const isoDate = () =>
   yup.string().nullable().default(null).matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'Use the date format YYYY-MM-DD.', excludeEmptyString: true })
+    .test('calendar-date', 'That date does not exist.', (v) => !v || !/^\d{4}-\d{2}-\d{2}$/.test(v) || isCalendarDate(v))
     .transform((v) => (v === '' ? null : v));
+
+/** PATCH bodies: any subset of the fields; a field left out keeps its stored value. */
+const partial = (fields: object) =>
+  Object.fromEntries(Object.entries(fields).map(([k, s]) => [k, (s as yup.AnySchema).optional().default(undefined)]));
 
 export const IANA_ZONE_PATTERN = /^[A-Za-z_]+(\/[A-Za-z0-9_+-]+)+$|^UTC$/;
 
@@ -19,6 +30,8 @@ export const siteSchema = yup.object({
   clientContactEmail: yup.string().trim().email('Enter a valid e-mail address.').max(254).nullable().default(null).transform((v) => (v === '' ? null : v)),
 });
 export type SiteInput = yup.InferType<typeof siteSchema>;
+
+export const sitePatchSchema = yup.object(partial(siteSchema.fields));
 
 export const safetyLocationsSchema = yup.object({
   emergencyStop: text(400),
@@ -36,6 +49,12 @@ export const plantRoomSchema = yup.object({
   safety: safetyLocationsSchema.default(() => ({ emergencyStop: '', gasIsolation: '', electricalIsolator: '', firstAid: '', exits: '' })),
 });
 export type PlantRoomInput = yup.InferType<typeof plantRoomSchema>;
+
+/** PATCH of a plant room; `safety` may carry only the locations that change. A room stays on its site. */
+export const plantRoomPatchSchema = yup.object({
+  ...partial({ name: plantRoomSchema.fields.name, floorArea: plantRoomSchema.fields.floorArea, accessNotes: plantRoomSchema.fields.accessNotes }),
+  safety: yup.object(partial(safetyLocationsSchema.fields)).optional().default(undefined),
+});
 
 /** Per-type fields kept in the asset's JSON `attributes` column. Units in the key names. */
 export const attributeSchemas: Record<AssetType, yup.AnyObjectSchema> = {
@@ -80,7 +99,7 @@ const assetFields = {
   name: yup.string().trim().min(2, 'At least 2 characters.').max(160).required('Name the item.'),
   type: yup.string().oneOf([...ASSET_TYPES], 'Choose a type.').required('Choose a type.'),
   system: text(120),
-  energySources: yup.array(yup.string().oneOf([...ENERGY_SOURCES]).required()).default([]),
+  energySources: yup.array(yup.string().oneOf([...ENERGY_SOURCES], `Use ${ENERGY_SOURCES.join(', ')}.`).required()).default([]),
   manufacturer: text(120),
   model: text(120),
   serialNumber: text(120),
@@ -88,7 +107,12 @@ const assetFields = {
   serviceIntervalMonths: yup.number().typeError('Enter a whole number of months.').integer('Whole months.').min(1).max(120).nullable().default(null),
   lastServiceDate: isoDate(),
   notes: text(4000),
-  attributes: yup.object().default({}),
+  // Kept as a plain object here and checked per type by validateAssetAttributes. Not yup.object(): with
+  // stripUnknown (as the API validates) an object schema without fields would drop every attribute.
+  attributes: yup
+    .mixed<Record<string, unknown>>((v): v is Record<string, unknown> => v !== null && typeof v === 'object' && !Array.isArray(v))
+    .typeError('Attributes must be an object.')
+    .default(() => ({})),
 };
 
 /** An asset; `attributes` are then validated by `attributeSchemas[type]` (see validateAssetAttributes). */

@@ -1,4 +1,6 @@
 import type { AssetType, EnergySource } from '@/shared/rules/register';
+import type { AssetState } from '@/shared/rules/tags';
+import type { PointUse, Tag } from '@/shared/types/tags';
 
 export interface Site {
   id: number;
@@ -75,8 +77,18 @@ export interface Asset {
   notes: string;
   attributes: AssetAttributes;
   archived: boolean;
+  /** When it was archived (ISO UTC); null while in service. */
+  archivedAt: string | null;
   photos?: Photo[];
   thumbnailUrl: string | null;
+  /** From the item's live tags (shared/rules/tags.ts assetStateFromTags), computed by the server's clock. */
+  state: AssetState;
+  overdue: boolean;
+  liveIsolations: number;
+  liveOverrides: number;
+  /** Single item only: its live tags, and the live tags for which it is an isolation point. */
+  liveTags?: Tag[];
+  pointUses?: PointUse[];
   createdBy: { id: number; name: string };
   createdAt: string;
   updatedAt: string;
@@ -94,5 +106,9 @@ export interface ImportResult {
   rows: number;
   created: number;
   updated: number;
+  /** Rows that match an item exactly as stored (an exported file imported back gives only these). */
+  unchanged: number;
+  /** Plant rooms named in the file that do not exist yet; they are created with the import. */
+  newPlantRooms: { site: string; name: string }[];
   errors: ImportRowError[];
 }

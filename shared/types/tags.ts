@@ -34,6 +34,8 @@ export interface Tag {
   reason: string;
   /** The person who holds the tag now (the raiser, or whoever took it over). */
   author: PersonRef;
+  /** Same as author.id; lets the shared rules (clearancePermission, mayExtend, mayTakeOver) take a tag as it is. */
+  holderId: number;
   raisedBy: PersonRef;
   raisedAt: string;
   expiresAt: string;

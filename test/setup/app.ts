@@ -1,3 +1,6 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import bcrypt from 'bcryptjs';
 import request from 'supertest';
 import { createApp } from '@/server/app';
@@ -19,9 +22,15 @@ export interface TestApp {
 
 export async function setupTestApp(overrides: Partial<ServerConfig> = {}): Promise<TestApp> {
   const db = await createTestDatabase();
-  const config = readConfig({}, { jwtSecret: TEST_JWT_SECRET, webDir: null, bcryptCost: 10, ...overrides });
+  // A data folder of its own (stored photos), removed with the database.
+  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'isoledger-test-data-'));
+  const config = readConfig({}, { jwtSecret: TEST_JWT_SECRET, webDir: null, bcryptCost: 10, dataDir, ...overrides });
   const app = createApp({ sequelize: db.sequelize, config });
-  return { app, db, config, close: db.drop };
+  const close = async () => {
+    await db.drop();
+    fs.rmSync(dataDir, { recursive: true, force: true });
+  };
+  return { app, db, config, close };
 }
 
 let cachedHash: string | null = null;

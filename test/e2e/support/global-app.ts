@@ -3,6 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { createApp } from '@/server/app';
+import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import { readConfig } from '@/server/config';
 import { createSequelize, migrate } from '@/server/db';
 import { seedDemo } from '@/server/seed/demo';
@@ -22,10 +23,11 @@ export default async function setup(project: TestProject) {
   await asRoot(dbPort, ['CREATE DATABASE isoledger CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci']);
   const sequelize = createSequelize(`mariadb://root@127.0.0.1:${dbPort}/isoledger`);
   await migrate(sequelize);
-  await seedDemo(sequelize);
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
   const config = readConfig({ PORT: String(port), DATA_DIR: dataDir }, { jwtSecret: 'e2e-secret', publicUrl: baseUrl });
+  // Demo photos go where this app reads them (the throwaway DATA_DIR), not the environment's default.
+  await seedDemo(sequelize, { storage: createPhotoStorage(config) });
   if (!fs.existsSync(path.join(config.webDir!, 'index.html'))) throw new Error('dist/index.html is missing: build the web app first (npm test does)');
   const app = createApp({ sequelize, config });
   const server = await new Promise<import('node:http').Server>((resolve) => {

@@ -20,7 +20,7 @@ import {
   type PlantLabel,
 } from '@/server/lib/label-pdf';
 import { formatLabelCode, generateLabelCode, labelUrl } from '@/shared/rules/label-code';
-import { PX_PER_MM, crop, darkBox, decodeQr, isDark, mmBox, rasterisePdf, toGray } from '@/test/server/lib/raster-helpers';
+import { PX_PER_MM, crop, darkBox, decodeQr, isDark, mmBox, rasterisePdf, toGray } from '@/test/support/raster-helpers';
 
 const PUBLIC_URL = 'https://plant.example.org';
 const LONG_NAME =

@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { PNG } from 'pngjs';
 import QRCode from 'qrcode';
 import { writeY4mFromPng } from '@/test/e2e/support/y4m';
-import { decodeQr } from '@/test/server/lib/raster-helpers';
+import { decodeQr } from '@/test/support/raster-helpers';
 
 let dir: string;
 beforeAll(() => {

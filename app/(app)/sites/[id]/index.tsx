@@ -1,0 +1,64 @@
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { View } from 'react-native';
+import { space } from '@/components/theme';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { LoadingView } from '@/components/ui/loading-view';
+import { Notice } from '@/components/ui/notice';
+import { QueryScreen } from '@/components/ui/query-screen';
+import { Screen } from '@/components/ui/screen';
+import { Text } from '@/components/ui/text';
+import { Breadcrumbs } from '@/components/register/breadcrumbs';
+import { DetailList } from '@/components/register/detail-list';
+import { PlantRoomList } from '@/components/register/plant-room-list';
+import { errorMessage } from '@/hooks/api/request';
+import { useSitePlantRoomsQuery } from '@/hooks/api/use-plant-rooms';
+import { useSiteQuery } from '@/hooks/api/use-sites';
+import { usePermissions } from '@/hooks/auth/use-permissions';
+
+export default function SiteScreen() {
+  const id = Number(useLocalSearchParams<{ id: string }>().id);
+  const router = useRouter();
+  const perms = usePermissions();
+  const site = useSiteQuery(id);
+  const rooms = useSitePlantRoomsQuery(id);
+  return (
+    <QueryScreen query={site} title="Site">
+      {(s) => (
+        <Screen
+          title={s.name}
+          subtitle={s.address || undefined}
+          actions={
+            <>
+              {perms.canAdd ? <Button title="Add plant room" onPress={() => router.push({ pathname: '/plant-rooms/new', params: { siteId: id } })} testID="site-add-plant-room" /> : null}
+              {perms.canCreateSite ? <Button title="Edit site" variant="secondary" onPress={() => router.push(`/sites/${id}/edit`)} /> : null}
+            </>
+          }
+        >
+          <Breadcrumbs trail={[{ label: 'Register', href: '/assets' }]} />
+          <View style={{ gap: space.sm }}>
+            <View style={{ flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap' }}>
+              <Text variant="title" style={{ flex: 1 }}>{`Plant rooms (${s.plantRoomCount})`}</Text>
+              <Button title={`All ${s.assetCount} items`} variant="secondary" onPress={() => router.push({ pathname: '/assets', params: { siteId: id } })} />
+            </View>
+            {rooms.isError ? <Notice tone="danger" word="Cannot load">{errorMessage(rooms.error)}</Notice> : null}
+            {rooms.data ? <PlantRoomList rooms={rooms.data.items} /> : rooms.isPending ? <LoadingView /> : null}
+          </View>
+          <Card>
+            <Text variant="title">Site details</Text>
+            <DetailList
+              twoColumns
+              rows={[
+                ['Address', s.address],
+                ['Time zone', s.timeZone],
+                ['Client contact', s.clientContactName],
+                ['Contact phone', s.clientContactPhone],
+                ['Contact e-mail', s.clientContactEmail],
+              ]}
+            />
+          </Card>
+        </Screen>
+      )}
+    </QueryScreen>
+  );
+}

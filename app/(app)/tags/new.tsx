@@ -1,0 +1,54 @@
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { Button } from '@/components/ui/button';
+import { LoadingView } from '@/components/ui/loading-view';
+import { Notice } from '@/components/ui/notice';
+import { QueryScreen } from '@/components/ui/query-screen';
+import { Screen } from '@/components/ui/screen';
+import { RaiseTagForm } from '@/components/tags/raise-tag-form';
+import { errorMessage } from '@/hooks/api/request';
+import { useAssetQuery } from '@/hooks/api/use-assets';
+import { useMeQuery } from '@/hooks/api/use-auth';
+import { useSiteQuery } from '@/hooks/api/use-sites';
+import { mayRaise, type TagKind } from '@/shared/rules/tags';
+
+export default function RaiseTagScreen() {
+  const params = useLocalSearchParams<{ assetId?: string; kind?: string }>();
+  const router = useRouter();
+  const assetId = Number(params.assetId) || 0;
+  const kind: TagKind = params.kind === 'override' ? 'override' : 'isolation';
+  const asset = useAssetQuery(assetId);
+  const site = useSiteQuery(asset.data?.siteId ?? 0);
+  const me = useMeQuery().data;
+
+  if (!assetId) {
+    return (
+      <Screen title="Raise a tag">
+        <Notice tone="info" word="Choose an item">Tags are raised from a plant item’s record. Find the item by its label or in the register.</Notice>
+        <Button title="Open the register" onPress={() => router.replace('/assets')} />
+      </Screen>
+    );
+  }
+  return (
+    <QueryScreen query={asset} title="Raise a tag">
+      {(item) => {
+        const title = 'Raise a tag';
+        const subtitle = `${item.plantId} · ${item.name} · ${item.siteName}`;
+        if (!me || !mayRaise(me)) {
+          return <Screen title={title} subtitle={subtitle}><Notice tone="info" word="Read only">Viewers cannot raise tags.</Notice></Screen>;
+        }
+        if (item.archived) {
+          return <Screen title={title} subtitle={subtitle}><Notice tone="info" word="Archived">This item is archived, so no tags can be raised on it.</Notice></Screen>;
+        }
+        if (site.isError) {
+          return <Screen title={title} subtitle={subtitle}><Notice tone="danger" word="Cannot load the site">{errorMessage(site.error)}</Notice></Screen>;
+        }
+        if (!site.data) return <LoadingView />;
+        return (
+          <Screen title={title} subtitle={subtitle}>
+            <RaiseTagForm asset={item} site={site.data} me={me} initialKind={kind} onRaised={(tag) => router.replace(`/tags/${tag.id}`)} onCancel={() => (router.canGoBack() ? router.back() : router.replace(`/assets/${item.id}`))} />
+          </Screen>
+        );
+      }}
+    </QueryScreen>
+  );
+}

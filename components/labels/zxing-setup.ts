@@ -1,0 +1,2 @@
+/** Native builds scan with the platform's own barcode reader: nothing to prepare. */
+export function prepareScannerWasm() {}

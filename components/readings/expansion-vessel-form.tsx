@@ -1,0 +1,137 @@
+import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { Formik, getIn, setIn, type FormikErrors } from 'formik';
+import { useMemo, useState } from 'react';
+import { Pressable, StyleSheet, View } from 'react-native';
+import { ValidationError } from 'yup';
+import { initialVesselForm, vesselFormPath, vesselFormToRequest, type VesselFormValues } from '@/components/readings/expansion-vessel-fields';
+import { ExpansionVesselResultView } from '@/components/readings/expansion-vessel-result';
+import { MarginChoice } from '@/components/readings/margin-choice';
+import { MeasurementField } from '@/components/readings/measurement-field';
+import { colors, layout, space } from '@/components/theme';
+import { useBreakpoints } from '@/components/theme/use-breakpoints';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { Text } from '@/components/ui/text';
+import { RequestError, errorMessage } from '@/hooks/api/request';
+import { useExpansionVesselCheckMutation } from '@/hooks/api/use-calc';
+import { UNIT_OPTIONS, type ExpansionVesselInputs } from '@/shared/calc';
+import { expansionVesselRequestSchema, type ExpansionVesselRequest } from '@/shared/schemas/readings';
+
+type Errors = FormikErrors<VesselFormValues>;
+const LITRES = [{ key: 'L', label: 'L' }];
+const CELSIUS = UNIT_OPTIONS.temperature;
+const METRES = UNIT_OPTIONS.length;
+
+async function validateVessel(values: VesselFormValues): Promise<Errors> {
+  const { body, unreadable } = vesselFormToRequest(values);
+  let errors: Errors = {};
+  try {
+    await expansionVesselRequestSchema.validate(body, { abortEarly: false });
+  } catch (err) {
+    if (!(err instanceof ValidationError)) throw err;
+    for (const e of err.inner.length ? err.inner : [err]) {
+      const path = vesselFormPath(e.path ?? '');
+      if (path && !getIn(errors, path)) errors = setIn(errors, path, e.message);
+    }
+  }
+  for (const [path, message] of Object.entries(unreadable)) errors = setIn(errors, path, message);
+  return errors;
+}
+
+/** The EN 12828 vessel calculator; `initial` prefills it, e.g. from a system and the register. */
+export function ExpansionVesselForm({ initial, initialMarginBar }: { initial?: Partial<ExpansionVesselInputs> | null; initialMarginBar?: number | null }) {
+  const { isWide } = useBreakpoints();
+  const check = useExpansionVesselCheckMutation();
+  const [checkedJson, setCheckedJson] = useState<string | null>(null);
+  const initialValues = useMemo(() => initialVesselForm(initial, initialMarginBar), [initial, initialMarginBar]);
+  return (
+    <Formik<VesselFormValues>
+      initialValues={initialValues}
+      enableReinitialize
+      validate={validateVessel}
+      onSubmit={async (values, { setErrors, setStatus }) => {
+        setStatus(undefined);
+        try {
+          await check.mutateAsync(vesselFormToRequest(values).body as ExpansionVesselRequest);
+          setCheckedJson(JSON.stringify(values));
+        } catch (err) {
+          if (err instanceof RequestError && err.fields) {
+            let mapped: Errors = {};
+            for (const [p, m] of Object.entries(err.fields)) mapped = setIn(mapped, vesselFormPath(p), m);
+            setErrors(mapped);
+          }
+          setStatus(errorMessage(err));
+        }
+      }}
+    >
+      {({ values, errors, touched, setFieldValue, setFieldTouched, handleSubmit, isSubmitting, submitCount, status }) => {
+        const show = (path: string) => (submitCount > 0 || getIn(touched, path) ? (getIn(errors, path) as string | undefined) : undefined);
+        const field = (name: keyof VesselFormValues, label: string, units: readonly { key: string; label: string }[], unitField?: keyof VesselFormValues, hint?: string) => (
+          <View style={isWide ? styles.fieldWide : undefined}>
+            <MeasurementField
+              label={label}
+              hint={hint}
+              value={values[name] as string}
+              onChangeText={(t) => setFieldValue(name, t)}
+              onBlur={() => setFieldTouched(name, true)}
+              unit={unitField ? (values[unitField] as string) : units[0].key}
+              units={units}
+              onUnitChange={unitField ? (u) => setFieldValue(unitField, u) : undefined}
+              error={show(name)}
+              testID={`vessel-${name}`}
+            />
+          </View>
+        );
+        const stale = check.data && checkedJson !== null && checkedJson !== JSON.stringify(values);
+        return (
+          <View style={{ gap: space.md }} testID="vessel-form">
+            <View style={[isWide && styles.fieldsWide]}>
+              {field('systemVolume', 'System water volume', UNIT_OPTIONS.volume, 'systemVolumeUnit', 'Boilers, pipework, emitters and calorifier coils.')}
+              {field('staticHeightM', 'Static height', METRES, undefined, 'From the vessel up to the highest point of the system.')}
+              {field('fillTemperatureC', 'Fill temperature', CELSIUS, undefined, 'Temperature of the water when the system is filled.')}
+              {field('maxFlowTemperatureC', 'Maximum flow temperature', CELSIUS, undefined, 'The highest the water can reach (limit thermostat).')}
+              {field('safetyValve', 'Safety valve setting', UNIT_OPTIONS.pressure, 'safetyValveUnit')}
+              {field('preCharge', 'Vessel pre-charge (optional)', UNIT_OPTIONS.pressure, 'preChargeUnit', 'Leave empty to use the minimum pre-charge.')}
+            </View>
+            <View style={{ gap: space.sm }}>
+              <Text variant="label" bold>Installed vessels (nominal volume)</Text>
+              {values.vessels.map((v, i) => (
+                <View key={i} style={styles.vesselRow}>
+                  <View style={{ flex: 1 }}>
+                    <MeasurementField
+                      label={`Vessel ${i + 1}`}
+                      value={v}
+                      onChangeText={(t) => setFieldValue(`vessels.${i}`, t)}
+                      unit="L"
+                      units={LITRES}
+                      error={show(`vessels.${i}`)}
+                      testID={`vessel-volume-${i}`}
+                    />
+                  </View>
+                  {values.vessels.length > 1 ? (
+                    <Pressable onPress={() => setFieldValue('vessels', values.vessels.filter((_, j) => j !== i))} accessibilityRole="button" accessibilityLabel={`Remove vessel ${i + 1}`} style={styles.remove}>
+                      <MaterialCommunityIcons name="close" size={24} color={colors.ink} />
+                    </Pressable>
+                  ) : null}
+                </View>
+              ))}
+              <Button title="Add a vessel" variant="secondary" onPress={() => setFieldValue('vessels', [...values.vessels, ''])} testID="vessel-add" />
+            </View>
+            <MarginChoice value={values.preChargeMarginBar} onChange={(v) => setFieldValue('preChargeMarginBar', v)} />
+            {status ? <Notice tone="danger" word="Not checked">{status}</Notice> : null}
+            <Button title="Check the vessel size" onPress={() => handleSubmit()} busy={isSubmitting} testID="vessel-check" />
+            {stale ? <Notice tone="info" word="Inputs changed">The result below is for the previous inputs. Check again to update it.</Notice> : null}
+            {check.data ? <ExpansionVesselResultView result={check.data.result} settings={check.data.settings} /> : null}
+          </View>
+        );
+      }}
+    </Formik>
+  );
+}
+
+const styles = StyleSheet.create({
+  fieldsWide: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg },
+  fieldWide: { flexBasis: 320, flexGrow: 1 },
+  vesselRow: { flexDirection: 'row', alignItems: 'flex-start', gap: space.sm },
+  remove: { minWidth: layout.minTouch, minHeight: layout.minTouch, marginTop: space.xl, alignItems: 'center', justifyContent: 'center' },
+});

@@ -1,0 +1,138 @@
+import { Formik, setIn, type FormikErrors } from 'formik';
+import { StyleSheet, View } from 'react-native';
+import { ValidationError } from 'yup';
+import { MarginChoice } from '@/components/readings/margin-choice';
+import { MeasurementField, type UnitOption } from '@/components/readings/measurement-field';
+import { defaultUnit, entryToSi, parseEntry, siToEntry } from '@/components/readings/reading-fields';
+import { space } from '@/components/theme';
+import { useBreakpoints } from '@/components/theme/use-breakpoints';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { RequestError, errorMessage } from '@/hooks/api/request';
+import { useSaveHeatingSystemMutation } from '@/hooks/api/use-heating-systems';
+import { formatNumber, UNIT_OPTIONS, type PhysicalQuantity } from '@/shared/calc';
+import { heatingSystemSchema, type HeatingSystemInput } from '@/shared/schemas/readings';
+import type { HeatingSystem } from '@/shared/types/readings';
+
+type Key = Exclude<keyof HeatingSystemInput, 'preChargeMarginBar'>;
+interface FieldDef {
+  key: Key;
+  label: string;
+  /** Null for design ΔT, which is entered in kelvin only. */
+  quantity: PhysicalQuantity | null;
+  hint?: string;
+}
+
+const FIELDS: FieldDef[] = [
+  { key: 'designDeltaTK', label: 'Design ΔT', quantity: null, hint: 'Flow − return at design, for example 11 K or 20 K.' },
+  { key: 'flowSetpointC', label: 'Flow setpoint', quantity: 'temperature' },
+  { key: 'safetyValveSettingGaugePa', label: 'Safety valve setting', quantity: 'pressure', hint: 'As marked on the valve.' },
+  { key: 'fillPressureGaugePa', label: 'Fill pressure', quantity: 'pressure', hint: 'Leave empty to use the pressurisation unit recorded on this system.' },
+  { key: 'systemVolumeM3', label: 'System water volume', quantity: 'volume' },
+  { key: 'staticHeightM', label: 'Static height', quantity: 'length', hint: 'From the vessel up to the highest point.' },
+  { key: 'maxFlowTemperatureC', label: 'Maximum flow temperature', quantity: 'temperature' },
+  { key: 'fillTemperatureC', label: 'Fill temperature', quantity: 'temperature' },
+];
+const KELVIN: UnitOption[] = [{ key: 'K', label: 'K' }];
+
+interface Values {
+  entries: Record<Key, string>;
+  units: Record<Key, string>;
+  preChargeMarginBar: number | null;
+}
+
+function initial(system: HeatingSystem): Values {
+  const entries = {} as Record<Key, string>;
+  const units = {} as Record<Key, string>;
+  for (const f of FIELDS) {
+    units[f.key] = f.quantity ? defaultUnit(f.quantity) : 'K';
+    const v = system[f.key];
+    entries[f.key] = f.quantity ? siToEntry(v, f.quantity, units[f.key]) : v === null ? '' : formatNumber(v, 5);
+  }
+  return { entries, units, preChargeMarginBar: system.preChargeMarginBar };
+}
+
+function toBody(values: Values): { body: HeatingSystemInput; unreadable: Record<string, string> } {
+  const body: Record<string, number | null> = { preChargeMarginBar: values.preChargeMarginBar };
+  const unreadable: Record<string, string> = {};
+  for (const f of FIELDS) {
+    const text = values.entries[f.key];
+    const v = f.quantity ? entryToSi(text, f.quantity, values.units[f.key]) : parseEntry(text);
+    if (Number.isNaN(v)) unreadable[`entries.${f.key}`] = 'Enter a number.';
+    body[f.key] = v === null || Number.isNaN(v) ? null : v;
+  }
+  return { body: body as HeatingSystemInput, unreadable };
+}
+
+const formPath = (apiPath: string) => (apiPath && apiPath !== '_' && apiPath !== 'preChargeMarginBar' ? `entries.${apiPath}` : apiPath || '_');
+
+/** Design values of one heating system; checks of every item on it use them from the next set on. */
+export function SystemSettingsForm({ system, onDone }: { system: HeatingSystem; onDone: () => void }) {
+  const { isWide } = useBreakpoints();
+  const save = useSaveHeatingSystemMutation(system.siteId);
+  return (
+    <Formik<Values>
+      initialValues={initial(system)}
+      validate={async (values) => {
+        const { body, unreadable } = toBody(values);
+        let errors: FormikErrors<Values> & { _?: string } = {};
+        try {
+          await heatingSystemSchema.validate(body, { abortEarly: false });
+        } catch (err) {
+          if (!(err instanceof ValidationError)) throw err;
+          for (const e of err.inner.length ? err.inner : [err]) errors = setIn(errors, formPath(e.path ?? ''), e.message);
+        }
+        for (const [p, m] of Object.entries(unreadable)) errors = setIn(errors, p, m);
+        return errors;
+      }}
+      onSubmit={async (values, { setErrors, setStatus }) => {
+        setStatus(undefined);
+        try {
+          await save.mutateAsync({ name: system.name, input: toBody(values).body });
+          onDone();
+        } catch (err) {
+          if (err instanceof RequestError && err.fields) {
+            let mapped = {};
+            for (const [p, m] of Object.entries(err.fields)) mapped = setIn(mapped, formPath(p), m);
+            setErrors(mapped);
+          }
+          setStatus(errorMessage(err));
+        }
+      }}
+    >
+      {({ values, errors, setFieldValue, handleSubmit, isSubmitting, submitCount, status }) => {
+        const errs = errors as FormikErrors<Values> & { _?: string };
+        return (
+          <View style={{ gap: space.sm }} testID="system-settings-form">
+            <View style={[isWide && styles.wide]}>
+              {FIELDS.map((f) => (
+                <View key={f.key} style={isWide ? styles.fieldWide : undefined}>
+                  <MeasurementField
+                    label={f.label}
+                    hint={f.hint}
+                    value={values.entries[f.key]}
+                    onChangeText={(t) => setFieldValue(`entries.${f.key}`, t)}
+                    unit={values.units[f.key]}
+                    units={f.quantity ? UNIT_OPTIONS[f.quantity] : KELVIN}
+                    onUnitChange={(u) => setFieldValue(`units.${f.key}`, u)}
+                    error={submitCount > 0 && errs.entries?.[f.key]}
+                    testID={`system-${f.key}`}
+                  />
+                </View>
+              ))}
+            </View>
+            <MarginChoice value={values.preChargeMarginBar} onChange={(v) => setFieldValue('preChargeMarginBar', v)} />
+            {submitCount > 0 && errs._ ? <Notice tone="caution" word="Check">{errs._}</Notice> : null}
+            {status ? <Notice tone="danger" word="Not saved">{status}</Notice> : null}
+            <Button title="Save system values" onPress={() => handleSubmit()} busy={isSubmitting} testID="system-save" />
+          </View>
+        );
+      }}
+    </Formik>
+  );
+}
+
+const styles = StyleSheet.create({
+  wide: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg },
+  fieldWide: { flexBasis: 280, flexGrow: 1 },
+});

@@ -1,0 +1,60 @@
+import { Formik } from 'formik';
+import { View } from 'react-native';
+import { space } from '@/components/theme';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { Notice } from '@/components/ui/notice';
+import { Text } from '@/components/ui/text';
+import { FormTextField, applyServerError, prepareValues } from '@/components/register/form-support';
+import { siteSchema, type SiteInput } from '@/shared/schemas/register';
+import type { Site } from '@/shared/types/register';
+
+type Values = Record<keyof SiteInput, string>;
+
+const initialFrom = (s?: Site): Values => ({
+  name: s?.name ?? '',
+  address: s?.address ?? '',
+  timeZone: s?.timeZone ?? 'Europe/London',
+  clientContactName: s?.clientContactName ?? '',
+  clientContactPhone: s?.clientContactPhone ?? '',
+  clientContactEmail: s?.clientContactEmail ?? '',
+});
+
+export function SiteForm({ site, submitLabel, onSubmit, onCancel }: { site?: Site; submitLabel: string; onSubmit: (input: SiteInput) => Promise<unknown>; onCancel: () => void }) {
+  return (
+    <Formik<Values>
+      initialValues={initialFrom(site)}
+      validationSchema={siteSchema}
+      onSubmit={async (values, { setErrors, setStatus }) => {
+        setStatus(undefined);
+        try {
+          await onSubmit(await siteSchema.validate(prepareValues(values), { stripUnknown: true }));
+        } catch (err) {
+          applyServerError(err, setErrors, setStatus);
+        }
+      }}
+    >
+      {({ handleSubmit, isSubmitting, status }) => (
+        <View style={{ gap: space.lg }}>
+          {status ? <Notice tone="danger" word="Not saved">{status}</Notice> : null}
+          <Card>
+            <Text variant="title">Site</Text>
+            <FormTextField name="name" label="Site name" />
+            <FormTextField name="address" label="Address" multiline numberOfLines={3} style={{ minHeight: 96, paddingTop: space.sm, textAlignVertical: 'top' }} />
+            <FormTextField name="timeZone" label="Time zone" hint="IANA name, e.g. Europe/London" autoCapitalize="none" autoCorrect={false} />
+          </Card>
+          <Card>
+            <Text variant="title">Client contact</Text>
+            <FormTextField name="clientContactName" label="Name" autoComplete="off" />
+            <FormTextField name="clientContactPhone" label="Phone" inputMode="tel" autoComplete="off" />
+            <FormTextField name="clientContactEmail" label="E-mail" inputMode="email" autoCapitalize="none" autoComplete="off" />
+          </Card>
+          <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm }}>
+            <Button title={submitLabel} onPress={() => handleSubmit()} busy={isSubmitting} testID="site-submit" />
+            <Button title="Cancel" variant="secondary" onPress={onCancel} />
+          </View>
+        </View>
+      )}
+    </Formik>
+  );
+}

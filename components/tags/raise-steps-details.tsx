@@ -1,0 +1,89 @@
+import { View } from 'react-native';
+import { colors, space } from '@/components/theme';
+import { Button } from '@/components/ui/button';
+import { Chip } from '@/components/ui/chip';
+import { Notice } from '@/components/ui/notice';
+import { Text } from '@/components/ui/text';
+import { TextField } from '@/components/ui/text-field';
+import { ENERGY_SOURCE_ICONS } from '@/components/register/register-vocabulary';
+import { PointEditor } from '@/components/tags/point-editor';
+import { newPoint } from '@/components/tags/raise-form-values';
+import type { StepProps } from '@/components/tags/raise-steps-kind';
+import { ENERGY_SOURCE_LABELS } from '@/shared/rules/register';
+import type { Asset } from '@/shared/types/register';
+
+const Err = ({ text }: { text?: string }) => (text ? <Text variant="small" style={{ color: colors.danger }}>{`⚠ ${text}`}</Text> : null);
+
+/** Step 2 of an isolation: which of the item's own energy sources, and where and how each is isolated. */
+function IsolationDetails({ values, set, errors, asset }: StepProps & { asset: Asset }) {
+  const toggle = (s: (typeof values.energySources)[number]) =>
+    set('energySources', values.energySources.includes(s) ? values.energySources.filter((x) => x !== s) : asset.energySources.filter((x) => x === s || values.energySources.includes(x)));
+  return (
+    <View style={{ gap: space.md }}>
+      <View style={{ gap: space.sm }}>
+        <Text variant="label" bold>Energy sources isolated</Text>
+        {asset.energySources.length ? (
+          <>
+            <Text variant="small" muted>{`The sources recorded for ${asset.plantId}. Choose every one you have isolated.`}</Text>
+            <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm }}>
+              {asset.energySources.map((s) => (
+                <Chip key={s} label={ENERGY_SOURCE_LABELS[s]} icon={ENERGY_SOURCE_ICONS[s]} selected={values.energySources.includes(s)} onPress={() => toggle(s)} testID={`source-${s}`} />
+              ))}
+            </View>
+          </>
+        ) : (
+          <Notice tone="caution" word="No energy sources recorded">
+            This item’s record lists no energy sources, so an isolation cannot be recorded against it. Ask for the item’s record to be completed first.
+          </Notice>
+        )}
+        <Err text={errors.energySources} />
+      </View>
+      <View style={{ gap: space.sm }}>
+        <Text variant="label" bold>Isolation points and methods</Text>
+        <Text variant="small" muted>Where the energy is isolated: another plant item such as a valve or an electrical isolator, or a described point such as a distribution board way.</Text>
+        {values.points.map((p, i) => (
+          <PointEditor
+            key={p.key}
+            index={i}
+            point={p}
+            siteId={asset.siteId}
+            excludeAssetId={asset.id}
+            onChange={(next) => set('points', values.points.map((x) => (x.key === p.key ? next : x)))}
+            onRemove={values.points.length > 1 ? () => set('points', values.points.filter((x) => x.key !== p.key)) : undefined}
+            errors={{ point: errors[`points[${i}]`] ?? errors[`points[${i}].description`], method: errors[`points[${i}].method`] }}
+          />
+        ))}
+        <Err text={errors.points} />
+        <Button title="Add another point" variant="secondary" onPress={() => set('points', [...values.points, newPoint()])} testID="add-point" />
+      </View>
+    </View>
+  );
+}
+
+/** Step 2 of an override: the normal state and the state it was left in. */
+function OverrideDetails({ values, set, errors }: StepProps) {
+  return (
+    <View>
+      <TextField label="Normal state" hint="e.g. Flow setpoint 80 °C, actuator on auto" value={values.normalState} onChangeText={(t) => set('normalState', t)} error={errors.normalState} testID="raise-normal-state" />
+      <TextField label="State it was left in" hint="e.g. Flow setpoint 85 °C, actuator on manual at 40 %" value={values.leftState} onChangeText={(t) => set('leftState', t)} error={errors.leftState} testID="raise-left-state" />
+    </View>
+  );
+}
+
+export function DetailsStep(props: StepProps & { asset: Asset }) {
+  const { values, set, errors } = props;
+  return (
+    <View style={{ gap: space.md }}>
+      {values.kind === 'isolation' ? <IsolationDetails {...props} /> : <OverrideDetails {...props} />}
+      <TextField
+        label="Lock or tag number"
+        hint={values.kind === 'isolation' ? 'The number on your personal lock or tag, if it has one.' : 'Optional.'}
+        value={values.lockNumber}
+        onChangeText={(t) => set('lockNumber', t)}
+        error={errors.lockNumber}
+        autoCapitalize="characters"
+        testID="raise-lock-number"
+      />
+    </View>
+  );
+}

@@ -1,0 +1,40 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { request } from '@/hooks/api/request';
+import type { ReadingCorrectionInput, ReadingSetInput } from '@/shared/schemas/readings';
+import type { ReadingList, ReadingSet } from '@/shared/types/readings';
+
+// Enough sets for a useful trend on one item; older sets stay on record and are paged by the API.
+export const TREND_PAGE_SIZE = 200;
+
+export const readingKeys = {
+  all: ['readings'] as const,
+  asset: (assetId: number) => [...readingKeys.all, 'asset', assetId] as const,
+};
+
+/** The item's reading sets, newest first (corrected originals included and marked). */
+export function useReadingsQuery(assetId: number) {
+  return useQuery({
+    queryKey: readingKeys.asset(assetId),
+    queryFn: () => request<ReadingList>(`/assets/${assetId}/readings?pageSize=${TREND_PAGE_SIZE}`),
+    enabled: assetId > 0,
+  });
+}
+
+/** Sends a set in SI; the server re-runs the checks and answers with the stored set. */
+export function useLogReadingsMutation(assetId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: ReadingSetInput) => request<ReadingSet>(`/assets/${assetId}/readings`, { method: 'POST', body: input }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: readingKeys.asset(assetId) }),
+  });
+}
+
+/** Appends a correction that supersedes `readingId`; the original stays on record. */
+export function useCorrectReadingMutation(assetId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ readingId, input }: { readingId: number; input: ReadingCorrectionInput }) =>
+      request<ReadingSet>(`/readings/${readingId}/correct`, { method: 'POST', body: input }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: readingKeys.asset(assetId) }),
+  });
+}

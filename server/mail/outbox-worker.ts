@@ -1,0 +1,135 @@
+import crypto from 'node:crypto';
+import os from 'node:os';
+import { QueryTypes, type Sequelize } from 'sequelize';
+import type { MailConfig } from '@/server/config';
+import { clock } from '@/server/lib/clock';
+import { logger } from '@/server/lib/logger';
+import type { MailKind } from '@/server/mail/outbox';
+import { renderMail } from '@/server/mail/templates';
+import { createMailTransport, type MailTransport } from '@/server/mail/transport';
+
+/** First retry after 30 s, doubling each time, never more than an hour apart. */
+export const BACKOFF_BASE_MS = 30_000;
+export const BACKOFF_MAX_MS = 3600_000;
+/** A message the mail server refuses outright (5xx) is given up after this many refusals; a server that is down never counts. */
+export const MAX_REFUSALS = 5;
+/** A claimed row left by a process that died is taken by another after this long (so a message may, rarely, go twice). */
+const CLAIM_MS = 2 * 60_000;
+
+export function backoffMs(attempts: number): number {
+  return Math.min(BACKOFF_MAX_MS, BACKOFF_BASE_MS * 2 ** Math.max(0, attempts - 1));
+}
+
+interface OutboxRow {
+  id: number | string;
+  kind: MailKind;
+  to_email: string;
+  payload: string | Record<string, unknown>;
+  attempts: number;
+  refusals: number;
+}
+
+export interface OutboxWorkerOptions {
+  sequelize: Sequelize;
+  mail: MailConfig;
+  publicUrl: string;
+  transport?: MailTransport;
+  /** Distinguishes processes in claimed_by; defaults to host:pid. */
+  name?: string;
+  batchSize?: number;
+}
+
+export interface OutboxWorker {
+  /** Claims and sends one batch of due mail; returns how many were sent and how many failed this time. */
+  runOnce(): Promise<{ sent: number; failed: number }>;
+  /** Runs batches every `mail.pollMs` until stopped. */
+  start(): void;
+  stop(): Promise<void>;
+}
+
+export function createOutboxWorker(opts: OutboxWorkerOptions): OutboxWorker {
+  const { sequelize } = opts;
+  const transport = opts.transport ?? createMailTransport(opts.mail);
+  const name = (opts.name ?? `${os.hostname()}:${process.pid}`).slice(0, 40);
+  const batchSize = opts.batchSize ?? 20;
+
+  /**
+   * Safe with several processes: one UPDATE … LIMIT marks due, unclaimed rows with a claim id unique to this
+   * batch (the row locks make two concurrent UPDATEs take disjoint rows), then only rows carrying that id are read.
+   */
+  async function claim(): Promise<OutboxRow[]> {
+    const now = clock.now();
+    const claimId = `${name}/${crypto.randomBytes(6).toString('hex')}`;
+    await sequelize.query(
+      `UPDATE outbox SET claimed_by = ?, claimed_until = ?
+       WHERE sent_at IS NULL AND failed_at IS NULL AND next_attempt_at <= ? AND (claimed_until IS NULL OR claimed_until < ?)
+       ORDER BY next_attempt_at, id LIMIT ${Number(batchSize)}`,
+      { replacements: [claimId, new Date(now.getTime() + CLAIM_MS), now, now] },
+    );
+    return sequelize.query<OutboxRow>('SELECT id, kind, to_email, payload, attempts, refusals FROM outbox WHERE claimed_by = ? AND sent_at IS NULL ORDER BY id', {
+      replacements: [claimId],
+      type: QueryTypes.SELECT,
+    });
+  }
+
+  async function deliver(row: OutboxRow): Promise<boolean> {
+    const payload = typeof row.payload === 'string' ? (JSON.parse(row.payload) as Record<string, unknown>) : row.payload;
+    const attempts = row.attempts + 1;
+    try {
+      const mail = renderMail(row.kind, payload, opts.publicUrl);
+      await transport.sendMail({ from: opts.mail.from, to: row.to_email, subject: mail.subject, text: mail.text, html: mail.html });
+      // A one-time link token has no business staying in the database once it has been handed over.
+      await sequelize.query(
+        `UPDATE outbox SET sent_at = ?, attempts = ?, claimed_by = NULL, claimed_until = NULL, last_error = NULL, payload = JSON_REMOVE(payload, '$.token')
+         WHERE id = ? AND sent_at IS NULL`,
+        { replacements: [clock.now(), attempts, row.id] },
+      );
+      return true;
+    } catch (err) {
+      const e = err as Error & { responseCode?: number; code?: string };
+      const refused = typeof e.responseCode === 'number' && e.responseCode >= 500;
+      const refusals = row.refusals + (refused ? 1 : 0);
+      const giveUp = refusals >= MAX_REFUSALS;
+      const now = clock.now();
+      await sequelize.query(
+        `UPDATE outbox SET attempts = ?, refusals = ?, next_attempt_at = ?, last_error = ?, claimed_by = NULL, claimed_until = NULL, failed_at = ?
+         WHERE id = ? AND sent_at IS NULL`,
+        { replacements: [attempts, refusals, new Date(now.getTime() + backoffMs(attempts)), `${e.code ?? e.responseCode ?? 'error'}: ${e.message}`.slice(0, 1000), giveUp ? now : null, row.id] },
+      );
+      logger.warn({ outboxId: row.id, kind: row.kind, attempts, code: e.code ?? e.responseCode, giveUp }, giveUp ? 'mail refused; given up' : 'mail not sent; will retry');
+      return false;
+    }
+  }
+
+  async function runOnce() {
+    const rows = await claim();
+    let sent = 0;
+    for (const row of rows) if (await deliver(row)) sent += 1;
+    return { sent, failed: rows.length - sent };
+  }
+
+  let timer: NodeJS.Timeout | null = null;
+  let running: Promise<unknown> | null = null;
+  let stopped = true;
+  const tick = () => {
+    running = runOnce()
+      .catch((err) => logger.error({ err }, 'outbox worker batch failed'))
+      .finally(() => {
+        running = null;
+        if (!stopped) timer = setTimeout(tick, opts.mail.pollMs);
+      });
+  };
+  return {
+    runOnce,
+    start() {
+      if (!stopped) return;
+      stopped = false;
+      timer = setTimeout(tick, 0);
+    },
+    async stop() {
+      stopped = true;
+      if (timer) clearTimeout(timer);
+      await running;
+    },
+  };
+}

@@ -1,0 +1,43 @@
+import { Router } from 'express';
+import type { AppContext } from '@/server/app';
+import { auth, currentUser } from '@/server/middleware/auth';
+import { validate } from '@/server/middleware/validate';
+import { addTagNote, clearInAbsence, clearTag, extendTag, handOverTag } from '@/server/services/tag-actions.service';
+import { getTag, listTags, raiseTag } from '@/server/services/tags.service';
+import { readPaging } from '@/shared/rules/paging';
+import { clearInAbsenceSchema, clearTagSchema, extendTagSchema, handoverSchema, raiseTagSchema, tagNoteSchema } from '@/shared/schemas/tags';
+
+export function tagsRoutes({ config, sequelize }: AppContext) {
+  const router = Router();
+  const authed = auth(config.jwtSecret);
+  const id = (raw: unknown) => Number(raw);
+
+  router.post('/assets/:id/tags', authed, validate(raiseTagSchema), async (req, res) => {
+    const key = req.get('idempotency-key')?.slice(0, 100) || null;
+    const { tag, created } = await raiseTag(sequelize, currentUser(req), id(req.params.id), req.body, key);
+    res.status(created ? 201 : 200).json(tag);
+  });
+  router.get('/tags', authed, async (req, res) => {
+    const q = req.query as Record<string, string | undefined>;
+    res.json(await listTags(currentUser(req), { status: q.status, kind: q.kind, assetId: q.assetId ? id(q.assetId) : undefined, siteId: q.siteId ? id(q.siteId) : undefined }, readPaging(req.query)));
+  });
+  router.get('/tags/:id', authed, async (req, res) => {
+    res.json(await getTag(currentUser(req), id(req.params.id)));
+  });
+  router.post('/tags/:id/clear', authed, validate(clearTagSchema), async (req, res) => {
+    res.json(await clearTag(sequelize, currentUser(req), id(req.params.id), req.body));
+  });
+  router.post('/tags/:id/clear-in-absence', authed, validate(clearInAbsenceSchema), async (req, res) => {
+    res.json(await clearInAbsence(sequelize, currentUser(req), id(req.params.id), req.body));
+  });
+  router.post('/tags/:id/extend', authed, validate(extendTagSchema), async (req, res) => {
+    res.json(await extendTag(sequelize, currentUser(req), id(req.params.id), req.body));
+  });
+  router.post('/tags/:id/handover', authed, validate(handoverSchema), async (req, res) => {
+    res.json(await handOverTag(sequelize, currentUser(req), id(req.params.id), req.body));
+  });
+  router.post('/tags/:id/notes', authed, validate(tagNoteSchema), async (req, res) => {
+    res.status(201).json(await addTagNote(sequelize, currentUser(req), id(req.params.id), req.body.text));
+  });
+  return router;
+}

@@ -1,0 +1,32 @@
+import { Router } from 'express';
+import type { AppContext } from '@/server/app';
+import { auth, currentUser, requireRole } from '@/server/middleware/auth';
+import { validate } from '@/server/middleware/validate';
+import { parseId } from '@/server/services/register-access';
+import { changeUser, inviteUser, resendInvite, setSiteAccess } from '@/server/services/team.service';
+import { changeUserSchema, inviteUserSchema, siteAccessSchema } from '@/shared/schemas/team';
+
+/**
+ * Team administration, admins only; every change is written to the audit log (GET /api/audit).
+ * POST  /api/users/invite       { name, email, role } → 201 TeamMember; e-mails a 7-day one-time link
+ * POST  /api/users/:id/invite   → TeamMember; a fresh link for someone who has not yet chosen a password
+ * PATCH /api/users/:id          { role?, active? } → TeamMember; deactivation ends their sessions at once
+ * PUT   /api/users/:id/sites    { siteIds } → TeamMember; the sites a viewer may see (replaces the list)
+ */
+export function teamRoutes({ sequelize, config }: AppContext) {
+  const router = Router();
+  const admin = [auth(config.jwtSecret), requireRole('admin')];
+  router.post('/users/invite', ...admin, validate(inviteUserSchema), async (req, res) => {
+    res.status(201).json(await inviteUser(sequelize, currentUser(req), req.body, req.ip ?? null));
+  });
+  router.post('/users/:id/invite', ...admin, async (req, res) => {
+    res.json(await resendInvite(sequelize, currentUser(req), parseId(req.params.id), req.ip ?? null));
+  });
+  router.patch('/users/:id', ...admin, validate(changeUserSchema), async (req, res) => {
+    res.json(await changeUser(sequelize, currentUser(req), parseId(req.params.id), req.body, req.ip ?? null));
+  });
+  router.put('/users/:id/sites', ...admin, validate(siteAccessSchema), async (req, res) => {
+    res.json(await setSiteAccess(sequelize, currentUser(req), parseId(req.params.id), req.body, req.ip ?? null));
+  });
+  return router;
+}

@@ -1,0 +1,117 @@
+import { HttpError } from '@/server/lib/http-error';
+import { ASSET_TYPES, ASSET_TYPE_LABELS, type AssetType } from '@/shared/rules/register';
+
+export const ASSET_SORTS = ['plantId', '-plantId', 'name', '-name', 'type', '-type', 'nextServiceDue', '-nextServiceDue'] as const;
+export type AssetSort = (typeof ASSET_SORTS)[number];
+
+export interface AssetListFilters {
+  q: string;
+  siteId: number | null;
+  plantRoomId: number | null;
+  type: AssetType | null;
+  sort: AssetSort;
+  includeArchived: boolean;
+}
+
+const badQuery = (field: string, message: string) => new HttpError(400, 'bad-query', message, { [field]: message });
+
+function optionalId(raw: unknown, field: string): number | null {
+  if (raw === undefined || raw === '') return null;
+  const id = Number(raw);
+  if (!Number.isSafeInteger(id) || id <= 0) throw badQuery(field, `${field} must be a positive whole number.`);
+  return id;
+}
+
+/** Reads `q, siteId, plantRoomId, type, sort, includeArchived` from a query string. */
+export function readAssetListFilters(query: Record<string, unknown>): AssetListFilters {
+  const type = query.type === undefined || query.type === '' ? null : String(query.type);
+  if (type !== null && !(ASSET_TYPES as readonly string[]).includes(type)) throw badQuery('type', `Unknown type; use one of ${ASSET_TYPES.join(', ')}.`);
+  const sort = query.sort === undefined || query.sort === '' ? 'plantId' : String(query.sort);
+  if (!(ASSET_SORTS as readonly string[]).includes(sort)) throw badQuery('sort', `Sort by one of ${ASSET_SORTS.join(', ')}.`);
+  return {
+    q: typeof query.q === 'string' ? query.q.trim().slice(0, 100) : '',
+    siteId: optionalId(query.siteId, 'siteId'),
+    plantRoomId: optionalId(query.plantRoomId, 'plantRoomId'),
+    type: type as AssetType | null,
+    sort: sort as AssetSort,
+    includeArchived: query.includeArchived === 'true' || query.includeArchived === '1',
+  };
+}
+
+// InnoDB's default full-text stopwords (information_schema.INNODB_FT_DEFAULT_STOPWORD): a required
+// stopword (+the*) would match nothing, so they are left out of the full-text query.
+const FT_STOPWORDS = new Set('a about an are as at be by com de en for from how i in is it la of on or that the this to was what when where who will with und www'.split(' '));
+// innodb_ft_min_token_size defaults to 3: shorter words are not in the full-text index.
+const FT_MIN_WORD = 3;
+
+const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
+
+/** Types whose key or label has a word starting with every word typed ("fan" → terminal unit, "calor" → water heater). */
+export function typesMatching(q: string): AssetType[] {
+  const words = q.toLowerCase().split(/[^\p{L}\p{N}]+/u).filter(Boolean);
+  if (q.length < 3 || !words.length) return [];
+  return ASSET_TYPES.filter((t) => {
+    const vocabulary = `${t} ${ASSET_TYPE_LABELS[t]}`.toLowerCase().split(/[^\p{L}\p{N}]+/u);
+    return words.every((w) => vocabulary.some((v) => v.startsWith(w)));
+  });
+}
+
+const ORDER: Record<AssetSort, string> = {
+  plantId: 'a.plant_id ASC, a.id ASC',
+  '-plantId': 'a.plant_id DESC, a.id DESC',
+  name: 'a.name ASC, a.id ASC',
+  '-name': 'a.name DESC, a.id DESC',
+  type: 'a.type ASC, a.plant_id ASC, a.id ASC',
+  '-type': 'a.type DESC, a.plant_id ASC, a.id ASC',
+  // Items without a service interval come last either way.
+  nextServiceDue: 'a.next_service_due IS NULL, a.next_service_due ASC, a.plant_id ASC, a.id ASC',
+  '-nextServiceDue': 'a.next_service_due IS NULL, a.next_service_due DESC, a.plant_id ASC, a.id ASC',
+};
+
+/**
+ * The SQL for one page of the item list. A search is a UNION of small indexed look-ups, each able to use
+ * its own index, rather than one WHERE with ORs that would scan the organisation's items:
+ *   plant ID, serial, name and system by prefix (B-tree indexes on (organisation_id, column));
+ *   words anywhere in name or system by FULLTEXT, each word as a required prefix (`+circ*`);
+ *   types whose name matches what was typed (index on (organisation_id, type, plant_id)).
+ * The union is materialised once as a derived table, then joined for the filters, order and page.
+ */
+export function buildAssetListSql(organisationId: number, f: AssetListFilters, paging: { pageSize: number; offset: number }) {
+  const r: Record<string, unknown> = { org: organisationId, limit: paging.pageSize, offset: paging.offset };
+  let from = 'assets a';
+  if (f.q) {
+    r.prefix = `${escapeLike(f.q)}%`;
+    const branches = ['plant_id', 'serial_number', 'name', 'system'].map(
+      (col) => `SELECT id FROM assets WHERE organisation_id = :org AND ${col} LIKE :prefix`,
+    );
+    const words = f.q.split(/[^\p{L}\p{N}]+/u).filter(Boolean);
+    const long = words.filter((w) => w.length >= FT_MIN_WORD && !FT_STOPWORDS.has(w.toLowerCase()));
+    if (long.length) {
+      r.ft = long.map((w) => `+${w}*`).join(' ');
+      // Short words (a circuit number, say) narrow the full-text hits by substring.
+      const short = words.filter((w) => w.length < FT_MIN_WORD && !FT_STOPWORDS.has(w.toLowerCase()));
+      const narrow = short.map((w, i) => {
+        r[`short${i}`] = `%${escapeLike(w)}%`;
+        return ` AND CONCAT_WS(' ', name, system) LIKE :short${i}`;
+      });
+      branches.push(`SELECT id FROM assets WHERE MATCH(name, system) AGAINST (:ft IN BOOLEAN MODE) AND organisation_id = :org${narrow.join('')}`);
+    }
+    const types = typesMatching(f.q);
+    if (types.length) {
+      r.types = types;
+      branches.push('SELECT id FROM assets WHERE organisation_id = :org AND type IN (:types)');
+    }
+    from = `(${branches.join(' UNION ')}) hits JOIN assets a ON a.id = hits.id`;
+  }
+  const where = ['a.organisation_id = :org'];
+  if (!f.includeArchived) where.push('a.archived_at IS NULL');
+  if (f.siteId) { where.push('a.site_id = :siteId'); r.siteId = f.siteId; }
+  if (f.plantRoomId) { where.push('a.plant_room_id = :plantRoomId'); r.plantRoomId = f.plantRoomId; }
+  if (f.type) { where.push('a.type = :type'); r.type = f.type; }
+  const tail = `FROM ${from} WHERE ${where.join(' AND ')}`;
+  return {
+    idsSql: `SELECT a.id ${tail} ORDER BY ${ORDER[f.sort]} LIMIT :limit OFFSET :offset`,
+    countSql: `SELECT COUNT(*) AS total ${tail}`,
+    replacements: r,
+  };
+}

@@ -1,0 +1,132 @@
+import { Op, QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
+import { pointUses, tagSummaries } from '@/server/services/tag-dto';
+import { listTags } from '@/server/services/tags.service';
+import { HttpError, conflict, notFound } from '@/server/lib/http-error';
+import { insertWithLabelCode, isUniqueClash } from '@/server/lib/unique-clash';
+import type { AuthUser } from '@/server/middleware/auth';
+import { Asset } from '@/server/models/asset.model';
+import { PlantRoom } from '@/server/models/plant-room.model';
+import { Site } from '@/server/models/site.model';
+import { User } from '@/server/models/user.model';
+import { buildAssetListSql, type AssetListFilters } from '@/server/services/asset-search';
+import { assetAsInput, assetColumns, validateAsset, type ValidAsset } from '@/server/services/asset-validation';
+import { firstAssetPhotoIds, photosOf } from '@/server/services/photos.service';
+import { assertCanEdit, plantRoomForField, siteForField } from '@/server/services/register-access';
+import { toAssetDto } from '@/server/services/register-dto';
+import type { Asset as AssetDto } from '@/shared/types/register';
+import type { ListResponse } from '@/shared/types/user';
+
+type Paging = { page: number; pageSize: number; offset: number };
+
+export const SITE_PLANT_ID_INDEX = 'assets_site_plant_id_unique';
+
+const include = [
+  { model: Site, as: 'site', attributes: ['id', 'name', 'timeZone'] },
+  { model: PlantRoom, as: 'plantRoom', attributes: ['id', 'name'] },
+  { model: User, as: 'creator', attributes: ['id', 'name'] },
+];
+
+export const plantIdTaken = (plantId: string, archived: boolean) =>
+  new HttpError(409, 'conflict', `Plant ID ${plantId} is already used at this site.`, {
+    plantId: archived ? `An archived item at this site has plant ID ${plantId}; choose another.` : `Plant ID ${plantId} is already used at this site.`,
+  });
+
+/** Items by id, in the order given, as the API shows them. */
+export async function loadAssetDtos(ids: number[], opts: { photos: boolean }): Promise<AssetDto[]> {
+  if (!ids.length) return [];
+  const rows = await Asset.findAll({ where: { id: { [Op.in]: ids } }, include });
+  const byId = new Map(rows.map((a) => [a.id, a]));
+  const [photos, thumbs] = await Promise.all([opts.photos ? photosOf('assetId', ids) : null, firstAssetPhotoIds(ids)]);
+  const states = await tagSummaries(rows[0]?.organisationId ?? 0, ids);
+  return ids
+    .filter((id) => byId.has(id))
+    .map((id) => ({
+      ...toAssetDto(byId.get(id)!, { photos: photos?.get(id), thumbnailPhotoId: thumbs.get(id) ?? null }),
+      ...(states.get(id) ?? { state: 'normal' as const, liveIsolations: 0, liveOverrides: 0, overdue: false }),
+    }));
+}
+
+export async function listAssets(actor: AuthUser, filters: AssetListFilters, paging: Paging): Promise<ListResponse<AssetDto>> {
+  const sql = buildAssetListSql(actor.organisationId, filters, paging);
+  const sequelize = Asset.sequelize!;
+  const [ids, count] = await Promise.all([
+    sequelize.query<{ id: number }>(sql.idsSql, { replacements: sql.replacements, type: QueryTypes.SELECT }),
+    sequelize.query<{ total: bigint | number }>(sql.countSql, { replacements: sql.replacements, type: QueryTypes.SELECT }),
+  ]);
+  const items = await loadAssetDtos(ids.map((r) => Number(r.id)), { photos: false });
+  return { items, total: Number(count[0]?.total ?? 0), page: paging.page, pageSize: paging.pageSize };
+}
+
+async function findAsset(actor: AuthUser, id: number, transaction?: Transaction): Promise<Asset> {
+  const asset = await Asset.findOne({ where: { id, organisationId: actor.organisationId }, transaction });
+  if (!asset) throw notFound('Plant item');
+  return asset;
+}
+
+export async function getAsset(actor: AuthUser, id: number): Promise<AssetDto> {
+  await findAsset(actor, id);
+  const [dto] = await loadAssetDtos([id], { photos: true });
+  const [live, uses] = await Promise.all([listTags(actor, { assetId: id, status: 'live' }, { page: 1, pageSize: 200, offset: 0 }), pointUses(actor.organisationId, id)]);
+  return { ...dto, liveTags: live.items, pointUses: uses };
+}
+
+/** Checks the site, the plant room (on that site) and that the plant ID is free there. */
+async function checkPlacement(actor: AuthUser, v: ValidAsset, selfId: number | null, transaction?: Transaction) {
+  await siteForField(actor, v.siteId, transaction);
+  if (v.plantRoomId) await plantRoomForField(actor, v.plantRoomId, v.siteId, transaction);
+  const other = await Asset.findOne({
+    where: { siteId: v.siteId, plantId: v.plantId, ...(selfId ? { id: { [Op.ne]: selfId } } : {}) },
+    transaction,
+  });
+  if (other) throw plantIdTaken(v.plantId, !!other.archivedAt);
+}
+
+/** Inserts a validated item with a fresh label code; the caller has checked its placement. */
+export async function insertAsset(actor: AuthUser, v: ValidAsset, transaction?: Transaction): Promise<Asset> {
+  try {
+    return await insertWithLabelCode((labelCode) =>
+      Asset.create({ ...assetColumns(v), organisationId: actor.organisationId, labelCode, createdBy: actor.id }, { transaction }),
+    );
+  } catch (err) {
+    if (isUniqueClash(err, SITE_PLANT_ID_INDEX)) throw plantIdTaken(v.plantId, false);
+    throw err;
+  }
+}
+
+export async function createAsset(actor: AuthUser, input: Record<string, unknown>): Promise<AssetDto> {
+  const v = await validateAsset(input);
+  await checkPlacement(actor, v, null);
+  const asset = await insertAsset(actor, v);
+  return (await loadAssetDtos([asset.id], { photos: true }))[0];
+}
+
+export async function updateAsset(actor: AuthUser, id: number, patch: Record<string, unknown>): Promise<AssetDto> {
+  const asset = await findAsset(actor, id);
+  assertCanEdit(actor, asset.createdBy, 'item');
+  if (asset.archivedAt) throw conflict('This item is archived; archived items are kept as they were.');
+  const given = Object.fromEntries(Object.entries(patch).filter(([, value]) => value !== undefined));
+  const merged: Record<string, unknown> = { ...assetAsInput(asset), ...given };
+  // Moved to another site without naming a room: it leaves its old site's room.
+  if (given.siteId !== undefined && given.siteId !== asset.siteId && given.plantRoomId === undefined) merged.plantRoomId = null;
+  const v = await validateAsset(merged);
+  await checkPlacement(actor, v, asset.id);
+  asset.set(assetColumns(v));
+  try {
+    await asset.save();
+  } catch (err) {
+    if (err instanceof UniqueConstraintError && isUniqueClash(err, SITE_PLANT_ID_INDEX)) throw plantIdTaken(v.plantId, false);
+    throw err;
+  }
+  return (await loadAssetDtos([asset.id], { photos: true }))[0];
+}
+
+/** Takes an item out of service. Nothing is deleted; archiving twice changes nothing. */
+export async function archiveAsset(actor: AuthUser, id: number): Promise<AssetDto> {
+  const asset = await findAsset(actor, id);
+  if (!asset.archivedAt) {
+    asset.archivedAt = new Date();
+    asset.archivedBy = actor.id;
+    await asset.save();
+  }
+  return (await loadAssetDtos([asset.id], { photos: true }))[0];
+}

@@ -1,0 +1,164 @@
+import { QueryTypes, type Sequelize } from 'sequelize';
+import { clock } from '@/server/lib/clock';
+import { HttpError, forbidden } from '@/server/lib/http-error';
+import type { AuthUser } from '@/server/middleware/auth';
+import { visibleSiteIds } from '@/server/services/site-access.service';
+import { BOARD_STATES, mayViewBoard, readBoardSort, type BoardSortKey, type BoardState } from '@/shared/rules/board';
+import { DUE_SOON_HOURS, TAG_KINDS, type TagKind } from '@/shared/rules/tags';
+import type { BoardResponse, BoardRow, BoardSiteCounts } from '@/shared/types/board';
+
+export interface BoardFilters {
+  siteId?: number;
+  kind?: TagKind;
+  authorId?: number;
+  state?: BoardState;
+  q?: string;
+  sort: { key: BoardSortKey; descending: boolean };
+}
+
+const SORT_COLUMNS: Record<BoardSortKey, string> = {
+  site: 's.name',
+  'plant-room': 'r.name',
+  'plant-id': 'a.plant_id',
+  name: 'a.name',
+  kind: 't.kind',
+  reason: 't.reason',
+  author: 'h.name',
+  raised: 't.raised_at',
+  expires: 't.expires_at',
+  // The state follows the expiry (overdue, then due soon, then live), so it sorts by expiry.
+  state: 't.expires_at',
+};
+
+const badFilter = (name: string, message: string) => new HttpError(400, 'bad-filter', message, { [name]: message });
+const optionalId = (raw: unknown, name: string) => {
+  if (raw === undefined || raw === '') return undefined;
+  const n = Number(raw);
+  if (!Number.isSafeInteger(n) || n <= 0) throw badFilter(name, `${name} must be a positive whole number.`);
+  return n;
+};
+
+/** Reads the board's filters from a query string; an unknown kind or state is a 400, an unknown sort the default. */
+export function readBoardFilters(query: Record<string, unknown>): BoardFilters {
+  const kind = query.kind === undefined || query.kind === '' ? undefined : String(query.kind);
+  if (kind !== undefined && !TAG_KINDS.includes(kind as TagKind)) throw badFilter('kind', `kind must be one of ${TAG_KINDS.join(', ')}.`);
+  const state = query.state === undefined || query.state === '' ? undefined : String(query.state);
+  if (state !== undefined && !BOARD_STATES.includes(state as BoardState)) throw badFilter('state', `state must be one of ${BOARD_STATES.join(', ')}.`);
+  const q = typeof query.q === 'string' ? query.q.trim().slice(0, 100) : '';
+  return {
+    siteId: optionalId(query.siteId, 'siteId'),
+    kind: kind as TagKind | undefined,
+    authorId: optionalId(query.authorId, 'authorId'),
+    state: state as BoardState | undefined,
+    q: q || undefined,
+    sort: readBoardSort(query.sort),
+  };
+}
+
+const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
+
+interface Scope { organisationId: number; siteIds: number[] | null; now: Date; soon: Date }
+
+/** WHERE clause over live tags; every filter is a column of an index or of a joined primary key. */
+function whereClause(scope: Scope, f: Partial<BoardFilters>) {
+  const where = ['t.organisation_id = ?', "t.status = 'live'"];
+  const values: unknown[] = [scope.organisationId];
+  if (scope.siteIds) {
+    if (!scope.siteIds.length) where.push('1 = 0');
+    else { where.push('a.site_id IN (?)'); values.push(scope.siteIds); }
+  }
+  if (f.siteId) { where.push('a.site_id = ?'); values.push(f.siteId); }
+  if (f.kind) { where.push('t.kind = ?'); values.push(f.kind); }
+  if (f.authorId) { where.push('t.holder_id = ?'); values.push(f.authorId); }
+  if (f.state === 'overdue') { where.push('t.expires_at < ?'); values.push(scope.now); }
+  if (f.state === 'due-soon') { where.push('t.expires_at >= ? AND t.expires_at <= ?'); values.push(scope.now, scope.soon); }
+  if (f.state === 'live') { where.push('t.expires_at > ?'); values.push(scope.soon); }
+  // Every word must appear in one of plant ID, item name, reason or holder name.
+  for (const word of (f.q ?? '').split(/\s+/).filter(Boolean).slice(0, 8)) {
+    const like = `%${likeEscape(word)}%`;
+    where.push('(a.plant_id LIKE ? OR a.name LIKE ? OR t.reason LIKE ? OR h.name LIKE ?)');
+    values.push(like, like, like, like);
+  }
+  return { sql: where.join(' AND '), values };
+}
+
+const FROM = `FROM tags t
+  JOIN assets a ON a.id = t.asset_id
+  JOIN sites s ON s.id = a.site_id
+  LEFT JOIN plant_rooms r ON r.id = a.plant_room_id
+  JOIN users h ON h.id = t.holder_id`;
+
+interface RawRow {
+  id: number; siteId: number; siteName: string; timeZone: string; plantRoomId: number | null; plantRoomName: string | null;
+  assetId: number; plantId: string; assetName: string; kind: TagKind; reason: string; holderId: number; holderName: string;
+  raisedAt: Date | string; expiresAt: Date | string; contactPhone: string;
+}
+
+function toRow(r: RawRow, scope: Scope): BoardRow {
+  const expiresAt = new Date(r.expiresAt);
+  const state: BoardState = expiresAt < scope.now ? 'overdue' : expiresAt <= scope.soon ? 'due-soon' : 'live';
+  return {
+    id: r.id, siteId: r.siteId, siteName: r.siteName, timeZone: r.timeZone, plantRoomId: r.plantRoomId, plantRoomName: r.plantRoomName,
+    assetId: r.assetId, plantId: r.plantId, assetName: r.assetName, kind: r.kind, reason: r.reason,
+    author: { id: r.holderId, name: r.holderName }, raisedAt: new Date(r.raisedAt).toISOString(), expiresAt: expiresAt.toISOString(),
+    state, contactPhone: r.contactPhone,
+  };
+}
+
+async function scopeFor(actor: AuthUser): Promise<Scope> {
+  if (!mayViewBoard(actor.role)) throw forbidden('The board is for supervisors, admins and viewers.');
+  const now = clock.now();
+  return { organisationId: actor.organisationId, siteIds: await visibleSiteIds(actor), now, soon: new Date(now.getTime() + DUE_SOON_HOURS * 3600_000) };
+}
+
+async function selectRows(sequelize: Sequelize, scope: Scope, f: BoardFilters, limit: number, offset: number): Promise<BoardRow[]> {
+  const w = whereClause(scope, f);
+  const dir = f.sort.descending ? 'DESC' : 'ASC';
+  const rows = await sequelize.query<RawRow>(
+    // Tags first: the (organisation_id, status, expires_at) index finds the live tags already in expiry order, so
+    // the default sort reads only one page of index entries; the other tables join on their primary keys.
+    `SELECT STRAIGHT_JOIN t.id, a.site_id AS siteId, s.name AS siteName, s.time_zone AS timeZone, a.plant_room_id AS plantRoomId, r.name AS plantRoomName,
+       a.id AS assetId, a.plant_id AS plantId, a.name AS assetName, t.kind, t.reason, t.holder_id AS holderId, h.name AS holderName,
+       t.raised_at AS raisedAt, t.expires_at AS expiresAt, t.contact_phone AS contactPhone
+     ${FROM} WHERE ${w.sql}
+     ORDER BY ${SORT_COLUMNS[f.sort.key]} ${dir}, t.expires_at ${dir}, t.id ${dir} LIMIT ? OFFSET ?`,
+    { replacements: [...w.values, limit, offset], type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => toRow(r, scope));
+}
+
+export async function getBoard(sequelize: Sequelize, actor: AuthUser, f: BoardFilters, paging: { page: number; pageSize: number; offset: number }): Promise<BoardResponse> {
+  const scope = await scopeFor(actor);
+  const w = whereClause(scope, f);
+  const [items, [{ n }], perSite] = await Promise.all([
+    selectRows(sequelize, scope, f, paging.pageSize, paging.offset),
+    sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n ${FROM} WHERE ${w.sql}`, { replacements: w.values, type: QueryTypes.SELECT }),
+    siteCounts(sequelize, scope),
+  ]);
+  const sum = (k: 'total' | 'overdue' | 'dueSoon') => perSite.reduce((acc, s) => acc + s[k], 0);
+  return {
+    items, total: Number(n), page: paging.page, pageSize: paging.pageSize,
+    counts: { total: sum('total'), overdue: sum('overdue'), dueSoon: sum('dueSoon'), perSite },
+    asOf: scope.now.toISOString(),
+  };
+}
+
+/** Every live tag the caller may see, counted per site in one grouped query. */
+async function siteCounts(sequelize: Sequelize, scope: Scope): Promise<BoardSiteCounts[]> {
+  const w = whereClause(scope, {});
+  const rows = await sequelize.query<{ siteId: number; siteName: string; total: number; overdue: number; dueSoon: number }>(
+    `SELECT a.site_id AS siteId, s.name AS siteName, COUNT(*) AS total,
+       SUM(t.expires_at < ?) AS overdue, SUM(t.expires_at >= ? AND t.expires_at <= ?) AS dueSoon
+     FROM tags t JOIN assets a ON a.id = t.asset_id JOIN sites s ON s.id = a.site_id
+     WHERE ${w.sql} GROUP BY a.site_id, s.name ORDER BY s.name, a.site_id`,
+    { replacements: [scope.now, scope.now, scope.soon, ...w.values], type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => ({ siteId: r.siteId, siteName: r.siteName, total: Number(r.total), overdue: Number(r.overdue), dueSoon: Number(r.dueSoon) }));
+}
+
+/** The current view for the CSV export: every page, up to `max` rows. */
+export async function boardRowsForExport(sequelize: Sequelize, actor: AuthUser, f: BoardFilters, max: number): Promise<{ rows: BoardRow[]; truncated: boolean }> {
+  const scope = await scopeFor(actor);
+  const rows = await selectRows(sequelize, scope, f, max + 1, 0);
+  return { rows: rows.slice(0, max), truncated: rows.length > max };
+}

@@ -1,0 +1,105 @@
+import crypto from 'node:crypto';
+import { Op, QueryTypes, type Transaction } from 'sequelize';
+import { HttpError, conflict, notFound, unprocessable } from '@/server/lib/http-error';
+import { PhotoNotStoredError, type PhotoStorage } from '@/server/lib/photo-storage';
+import { processPhoto } from '@/server/lib/photo-processing';
+import type { AuthUser } from '@/server/middleware/auth';
+import { Asset } from '@/server/models/asset.model';
+import { Photo } from '@/server/models/photo.model';
+import { User } from '@/server/models/user.model';
+import { toPhotoDto } from '@/server/services/register-dto';
+import { findPlantRoom } from '@/server/services/register-access';
+import type { Photo as PhotoDto } from '@/shared/types/register';
+
+const withCreator = { model: User, as: 'creator', attributes: ['id', 'name'] };
+
+export async function photosOf(owner: 'assetId' | 'plantRoomId', ids: number[], transaction?: Transaction): Promise<Map<number, Photo[]>> {
+  const byOwner = new Map<number, Photo[]>(ids.map((id) => [id, []]));
+  if (!ids.length) return byOwner;
+  const photos = await Photo.findAll({ where: { [owner]: { [Op.in]: ids } }, include: [withCreator], order: [['id', 'ASC']], transaction });
+  for (const p of photos) byOwner.get(p[owner]!)?.push(p);
+  return byOwner;
+}
+
+/** The first photo of each item, for list thumbnails, in one grouped query. */
+export async function firstAssetPhotoIds(assetIds: number[]): Promise<Map<number, number>> {
+  const first = new Map<number, number>();
+  if (!assetIds.length) return first;
+  const rows = await Photo.sequelize!.query<{ assetId: number; photoId: number }>(
+    'SELECT asset_id AS assetId, MIN(id) AS photoId FROM photos WHERE asset_id IN (:ids) GROUP BY asset_id',
+    { replacements: { ids: assetIds }, type: QueryTypes.SELECT },
+  );
+  for (const r of rows) first.set(Number(r.assetId), Number(r.photoId));
+  return first;
+}
+
+function readCaption(raw: unknown): string | null {
+  if (raw === undefined || raw === null) return null;
+  const caption = String(raw).trim();
+  if (caption.length > 200) throw unprocessable('Some fields need attention.', { caption: 'At most 200 characters.' });
+  return caption || null;
+}
+
+/**
+ * Stores a photo of a plant item or plant room. Any engineer may add photos to any room or item of the
+ * organisation (a photo adds to the record, it changes nothing in it); archived items take no new photos.
+ */
+export async function addPhoto(
+  actor: AuthUser,
+  storage: PhotoStorage,
+  owner: { assetId: number } | { plantRoomId: number },
+  file: { buffer: Buffer },
+  rawCaption?: unknown,
+): Promise<PhotoDto> {
+  const caption = readCaption(rawCaption);
+  if ('assetId' in owner) {
+    const asset = await Asset.findOne({ where: { id: owner.assetId, organisationId: actor.organisationId } });
+    if (!asset) throw notFound('Plant item');
+    if (asset.archivedAt) throw conflict('This item is archived; it takes no new photos.');
+  } else {
+    await findPlantRoom(actor, owner.plantRoomId);
+  }
+  const photo = await storePhoto(storage, { organisationId: actor.organisationId, ...owner, createdBy: actor.id, caption }, file.buffer);
+  await photo.reload({ include: [withCreator] });
+  return toPhotoDto(photo);
+}
+
+/** Re-encodes an image (processPhoto), writes it and its thumbnail to storage, and records it. */
+export async function storePhoto(
+  storage: PhotoStorage,
+  row: { organisationId: number; assetId?: number; plantRoomId?: number; createdBy: number; caption: string | null },
+  input: Buffer,
+  transaction?: Transaction,
+): Promise<Photo> {
+  const processed = await processPhoto(input);
+  const base = `${row.organisationId}/${crypto.randomUUID()}`;
+  await storage.put(`${base}.jpg`, processed.image, 'image/jpeg');
+  await storage.put(`${base}-thumb.jpg`, processed.thumbnail, 'image/jpeg');
+  return Photo.create(
+    {
+      organisationId: row.organisationId,
+      assetId: row.assetId ?? null,
+      plantRoomId: row.plantRoomId ?? null,
+      storageKey: `${base}.jpg`,
+      thumbnailKey: `${base}-thumb.jpg`,
+      width: processed.width,
+      height: processed.height,
+      bytes: processed.image.length,
+      caption: row.caption,
+      createdBy: row.createdBy,
+    },
+    { transaction },
+  );
+}
+
+/** The JPEG bytes of a photo or its thumbnail; another organisation's photo is a 404 like a missing one. */
+export async function readPhotoFile(actor: AuthUser, storage: PhotoStorage, id: number, variant: 'full' | 'thumbnail'): Promise<Buffer> {
+  const photo = await Photo.findOne({ where: { id, organisationId: actor.organisationId } });
+  if (!photo) throw notFound('Photo');
+  try {
+    return await storage.get(variant === 'full' ? photo.storageKey : photo.thumbnailKey);
+  } catch (err) {
+    if (err instanceof PhotoNotStoredError) throw new HttpError(404, 'photo-file-missing', 'The photo file is missing from storage.');
+    throw err;
+  }
+}

@@ -1,0 +1,97 @@
+import { Op, type Transaction } from 'sequelize';
+import { clock } from '@/server/lib/clock';
+import { Asset } from '@/server/models/asset.model';
+import { PlantRoom } from '@/server/models/plant-room.model';
+import { Site } from '@/server/models/site.model';
+import { Tag } from '@/server/models/tag.model';
+import { TagEvent } from '@/server/models/tag-event.model';
+import { TagPoint } from '@/server/models/tag-point.model';
+import { User } from '@/server/models/user.model';
+import { assetStateFromTags, isDueSoon, isOverdue, type AssetTagSummary } from '@/shared/rules/tags';
+import type { PointUse, Tag as TagDto, TagEvent as TagEventDto } from '@/shared/types/tags';
+
+const person = (u: User | null | undefined) => (u ? { id: u.id, name: u.name } : { id: 0, name: 'Unknown' });
+
+/** Everything a tag answer needs, in one query. */
+export const tagInclude = [
+  { model: Asset, as: 'asset', include: [{ model: Site, as: 'site' }, { model: PlantRoom, as: 'plantRoom' }] },
+  { model: TagPoint, as: 'points', include: [{ model: Asset, as: 'asset' }] },
+  { model: User, as: 'holder' },
+  { model: User, as: 'raisedBy' },
+  { model: User, as: 'clearedBy' },
+];
+
+export function toTagDto(tag: Tag, events?: TagEvent[]): TagDto {
+  const now = clock.now();
+  const asset = (tag as Tag & { asset: Asset }).asset;
+  return {
+    id: tag.id,
+    assetId: tag.assetId,
+    asset: {
+      id: asset.id,
+      plantId: asset.plantId,
+      name: asset.name,
+      siteId: asset.siteId,
+      siteName: asset.site?.name ?? '',
+      plantRoomName: asset.plantRoom?.name ?? null,
+      timeZone: asset.site?.timeZone ?? 'UTC',
+    },
+    kind: tag.kind,
+    status: tag.status,
+    overdue: isOverdue(tag, now),
+    dueSoon: isDueSoon(tag, now),
+    reason: tag.reason,
+    author: person(tag.holder),
+    holderId: tag.holderId,
+    raisedBy: person(tag.raisedBy),
+    raisedAt: tag.raisedAt.toISOString(),
+    expiresAt: tag.expiresAt.toISOString(),
+    contactPhone: tag.contactPhone,
+    lockNumber: tag.lockNumber,
+    energySources: tag.energySources,
+    points: (tag.points ?? []).map((p) => {
+      const pa = (p as TagPoint & { asset: Asset | null }).asset;
+      return { id: p.id, assetId: p.assetId, asset: pa ? { id: pa.id, plantId: pa.plantId, name: pa.name } : null, description: p.description, method: p.method };
+    }),
+    normalState: tag.normalState,
+    leftState: tag.leftState,
+    clearedAt: tag.clearedAt ? tag.clearedAt.toISOString() : null,
+    clearedBy: tag.clearedBy ? person(tag.clearedBy) : null,
+    checks: tag.checks ?? null,
+    photoCount: 0,
+    ...(events ? { events: events.map(toEventDto) } : {}),
+  };
+}
+
+export function toEventDto(e: TagEvent): TagEventDto {
+  return { id: Number(e.id), type: e.type, at: e.at.toISOString(), by: person(e.by), data: e.data };
+}
+
+export async function loadEvents(tagId: number, transaction?: Transaction) {
+  return TagEvent.findAll({ where: { tagId }, include: [{ model: User, as: 'by' }], order: [['id', 'ASC']], transaction });
+}
+
+/** State per item for lists and records: one grouped query over live tags. */
+export async function tagSummaries(organisationId: number, assetIds: number[]): Promise<Map<number, AssetTagSummary>> {
+  const result = new Map<number, AssetTagSummary>();
+  if (!assetIds.length) return result;
+  const live = await Tag.findAll({
+    attributes: ['assetId', 'kind', 'status', 'expiresAt'],
+    where: { organisationId, status: 'live', assetId: { [Op.in]: assetIds } },
+  });
+  const now = clock.now();
+  for (const id of assetIds) result.set(id, assetStateFromTags(live.filter((t) => t.assetId === id), now));
+  return result;
+}
+
+/** Where an item is itself an isolation point of a live tag on another item ("locked shut for work on …"). */
+export async function pointUses(organisationId: number, assetId: number): Promise<PointUse[]> {
+  const points = await TagPoint.findAll({
+    where: { assetId },
+    include: [{ model: Tag, as: 'tag', where: { organisationId, status: 'live' }, include: [{ model: Asset, as: 'asset' }, { model: User, as: 'holder' }] }],
+  });
+  return points.map((p) => {
+    const tag = (p as TagPoint & { tag: Tag & { asset: Asset } }).tag;
+    return { tagId: tag.id, method: p.method, forAsset: { id: tag.asset.id, plantId: tag.asset.plantId, name: tag.asset.name }, holder: person(tag.holder) };
+  });
+}

@@ -1,0 +1,269 @@
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { DESKTOP, PHONE, launch, openPage, screenshot, signIn, type Session, type WatchedPage } from '@/test/e2e/support/browser';
+import type { Asset } from '@/shared/types/register';
+import type { Tag } from '@/shared/types/tags';
+import type { ListResponse } from '@/shared/types/user';
+
+let session: Session;
+const baseUrl = inject('baseUrl');
+
+async function api<T>(path: string, token: string | null, body?: object): Promise<T> {
+  const res = await fetch(`${baseUrl}/api${path}`, {
+    method: body ? 'POST' : 'GET',
+    headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}) },
+    body: body ? JSON.stringify(body) : undefined,
+  });
+  if (!res.ok) throw new Error(`${path} answered ${res.status}: ${await res.text()}`);
+  return (await res.json()) as T;
+}
+const login = async (email: string) => (await api<{ token: string }>('/auth/login', null, { email, password: 'isoledger-demo' })).token;
+
+async function signedIn(viewport: { width: number; height: number }, email: string, role: string): Promise<WatchedPage> {
+  const watched = await openPage(session.browser, viewport);
+  await signIn(watched.page, baseUrl, email);
+  await watched.page.getByTestId(`home-${role}`).waitFor();
+  return watched;
+}
+
+const text = (page: Page, testId: string) => page.getByTestId(testId).innerText();
+
+function clean(w: WatchedPage) {
+  expect(w.errors).toEqual([]);
+  expect(w.offsite).toEqual([]);
+}
+
+let pump: Asset;
+let isolator: Asset;
+let tagId = 0;
+
+beforeAll(async () => {
+  session = await launch();
+  const token = await login('engineer@example.test');
+  const pumps = await api<ListResponse<Asset>>('/assets?q=P-&pageSize=50', token);
+  const candidates = pumps.items.filter((a) => a.type === 'pump' && a.energySources.includes('electrical') && a.energySources.includes('mechanical'));
+  for (const a of candidates) {
+    const live = await api<ListResponse<Tag>>(`/tags?assetId=${a.id}&status=live`, token);
+    if (live.total === 0) { pump = a; break; }
+  }
+  expect(pump).toBeDefined();
+  const panels = await api<ListResponse<Asset>>(`/assets?q=CP-&siteId=${pump.siteId}`, token);
+  isolator = panels.items.find((a) => a.type === 'control-panel')!;
+  expect(isolator).toBeDefined();
+});
+afterAll(() => session.close());
+
+describe('isolation tags on a plant item', () => {
+  it('an engineer raises an isolation on a phone, step by step, and the item shows as isolated', async () => {
+    const w = await signedIn(PHONE, 'engineer@example.test', 'engineer');
+    const { page } = w;
+    // The item's record as its QR label opens it.
+    await page.goto(`${baseUrl}/l/${pump.labelCode}`);
+    await page.getByTestId('asset-state-banner').waitFor();
+    expect(new URL(page.url()).pathname).toBe(`/assets/${pump.id}`);
+    expect(await text(page, 'asset-state-word')).toBe('Normal');
+    await screenshot(page, 'tags-item-normal-phone');
+
+    await page.getByTestId('raise-isolation').click();
+    await page.getByTestId('raise-tag-form').waitFor();
+    expect(await page.getByRole('radio', { name: 'Isolation' }).getAttribute('aria-checked')).toBe('true');
+    await page.getByTestId('raise-reason').fill('Replace');
+    await expect(text(page, 'raise-reason-progress')).resolves.toMatch(/enough detail/);
+    await page.getByTestId('raise-reason').fill('Replace the mechanical seal on this pump');
+    await screenshot(page, 'tags-raise-1-kind-phone');
+    await page.getByTestId('raise-next').click();
+
+    // Only the item's own energy sources are offered.
+    for (const s of ['electrical', 'mechanical', 'stored-pressure', 'gas']) {
+      await expect(page.getByTestId(`source-${s}`).count()).resolves.toBe(pump.energySources.includes(s as never) ? 1 : 0);
+    }
+    await page.getByTestId('raise-next').click();
+    await page.getByText('Choose at least one energy source that is isolated.').waitFor();
+    await page.getByTestId('source-electrical').click();
+    await page.getByTestId('source-mechanical').click();
+    await screenshot(page, 'tags-raise-2-sources-phone');
+    await page.getByTestId('point-0-search').fill(isolator.plantId);
+    await page.getByTestId(`point-0-result-${isolator.id}`).click();
+    await page.getByTestId('point-0-chosen').waitFor();
+    await page.getByTestId('point-0-method').click();
+    await page.getByRole('radio', { name: 'Isolator locked off' }).click();
+    await page.getByTestId('add-point').click();
+    await page.getByTestId('point-1-mode-text').click();
+    await page.getByTestId('point-1-description').fill('Isolation valves either side of the pump');
+    await page.getByTestId('point-1-method').click();
+    await page.getByRole('radio', { name: 'Valve locked shut' }).click();
+    await page.getByTestId('raise-lock-number').fill('L-117');
+    await screenshot(page, 'tags-raise-2-details-phone');
+    await page.getByTestId('raise-next').click();
+
+    // The default expiry is the end of today at the site, named with the site's zone.
+    await expect(text(page, 'raise-expiry-summary')).resolves.toMatch(/Expires .*23:59 \(Europe\/London\)/);
+    await page.getByTestId('raise-contact-phone').fill('+44 7700 900103');
+    await screenshot(page, 'tags-raise-3-expiry-phone');
+    await page.getByTestId('raise-next').click();
+
+    await page.getByTestId('isolation-cautions').waitFor();
+    await expect(text(page, 'isolation-cautions')).resolves.toMatch(/does not isolate anything/);
+    await screenshot(page, 'tags-raise-4-review-phone');
+    await page.getByTestId('raise-submit').click();
+
+    await page.getByTestId('tag-header').waitFor();
+    tagId = Number(new URL(page.url()).pathname.split('/').pop());
+    expect(tagId).toBeGreaterThan(0);
+    expect(await text(page, 'tag-status-word')).toBe('Live');
+    await expect(text(page, 'tag-holder')).resolves.toBe('Kofi Marchetti');
+    await expect(text(page, 'tag-expiry-relative')).resolves.toMatch(/^expires in /);
+    await expect(text(page, 'tag-points')).resolves.toContain(isolator.plantId);
+    await screenshot(page, 'tags-detail-live-phone');
+
+    await page.getByTestId('tag-item-link').click();
+    await page.getByTestId('asset-live-tags').waitFor();
+    expect(await text(page, 'asset-state-word')).toBe('Isolated');
+    await expect(text(page, 'asset-state-banner')).resolves.toMatch(/1 live isolation tag/);
+    await screenshot(page, 'tags-item-isolated-phone');
+    clean(w);
+    await w.context.close();
+  });
+
+  it('another engineer cannot clear it and is told why; the tag stays live', async () => {
+    const w = await signedIn(PHONE, 'engineer2@example.test', 'engineer');
+    const { page } = w;
+    await page.goto(`${baseUrl}/tags/${tagId}`);
+    await page.getByTestId('tag-header').waitFor();
+    await page.getByTestId('tag-action-refused').click();
+    await expect(text(page, 'clear-refused')).resolves.toMatch(/Only the person who holds this tag can clear it\. Kofi Marchetti holds it/);
+    await screenshot(page, 'tags-clear-refused-phone');
+    // OSHA 29 CFR 1910.147(e)(3): each device is removed by the employee who applied it — the server refuses too.
+    const res = await fetch(`${baseUrl}/api/tags/${tagId}/clear`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${await login('engineer2@example.test')}` },
+      body: JSON.stringify({ reason: 'Looks finished to me', checks: { workComplete: true, guardsRefitted: true, personnelClear: true, testedSafe: true } }),
+    });
+    expect(res.status).toBe(403);
+    await page.reload();
+    await page.getByTestId('tag-header').waitFor();
+    expect(await text(page, 'tag-status-word')).toBe('Live');
+    clean(w);
+    await w.context.close();
+  });
+
+  it('the holder clears it with a reason and the release checks; the history shows raised and cleared', async () => {
+    const w = await signedIn(PHONE, 'engineer@example.test', 'engineer');
+    const { page } = w;
+    await page.goto(`${baseUrl}/tags/${tagId}`);
+    await page.getByTestId('tag-action-clear').click();
+    await page.getByTestId('clear-reason').fill('Seal done');
+    await expect(text(page, 'clear-reason-progress')).resolves.toMatch(/9 of at least 10 characters: 1 more/);
+    await page.getByTestId('clear-submit').click();
+    await page.getByText('Confirm this before clearing.').first().waitFor();
+    await page.getByTestId('clear-reason').fill('Seal replaced, pump run and tested for 20 minutes');
+    for (const k of ['workComplete', 'guardsRefitted', 'personnelClear', 'testedSafe']) await page.getByTestId(`check-${k}`).click();
+    await screenshot(page, 'tags-clear-form-phone');
+    await page.getByTestId('clear-submit').click();
+    await page.getByText('Tag cleared. The item’s state is updated.').waitFor();
+    expect(await text(page, 'tag-status-word')).toBe('Cleared');
+    await page.getByTestId('timeline-cleared').scrollIntoViewIfNeeded();
+    await expect(page.getByTestId('timeline-raised').count()).resolves.toBe(1);
+    await expect(text(page, 'timeline-cleared')).resolves.toMatch(/Seal replaced, pump run and tested[\s\S]*All release checks confirmed/);
+    await screenshot(page, 'tags-detail-cleared-phone');
+    await page.getByTestId('tag-item-link').click();
+    await page.getByTestId('asset-tag-history').waitFor();
+    expect(await text(page, 'asset-state-word')).toBe('Normal');
+    clean(w);
+    await w.context.close();
+  });
+
+  it('on a wide screen a supervisor raises an override on one page and clears another engineer’s isolation in their absence', async () => {
+    const holder = await api<Tag>(`/assets/${pump.id}/tags`, await login('engineer2@example.test'), {
+      kind: 'isolation',
+      reason: 'Investigate noisy bearing',
+      expiresAt: new Date(Date.now() + 3 * 3600_000).toISOString(),
+      energySources: ['electrical'],
+      points: [{ description: 'Starter isolator on the pump set', method: 'isolator-locked' }],
+      contactPhone: '+44 7700 900104',
+    });
+    const w = await signedIn(DESKTOP, 'supervisor@example.test', 'supervisor');
+    const { page } = w;
+    await page.goto(`${baseUrl}/assets/${pump.id}`);
+    await page.getByTestId('asset-live-tags').waitFor();
+    expect(await text(page, 'asset-state-word')).toBe('Isolated');
+    await screenshot(page, 'tags-item-isolated-desktop');
+
+    await page.getByTestId('raise-override').click();
+    await page.getByTestId('raise-tag-form').waitFor();
+    // One page: every section at once, no steps.
+    await expect(page.getByTestId('raise-next').count()).resolves.toBe(0);
+    await page.getByTestId('raise-submit').click();
+    await expect(page.getByText('Some answers need attention: reason, normal state, state it was left in.').isVisible()).resolves.toBe(true);
+    await screenshot(page, 'tags-raise-errors-desktop');
+    await page.getByTestId('raise-reason').fill('Pump forced on for a flow test');
+    await page.getByTestId('raise-normal-state').fill('Pump on auto from the BMS');
+    await page.getByTestId('raise-left-state').fill('Pump in hand, running');
+    await page.getByTestId('raise-reason').scrollIntoViewIfNeeded();
+    await screenshot(page, 'tags-raise-desktop');
+    await page.getByTestId('raise-submit').click();
+    await page.getByTestId('tag-override-states').waitFor();
+    expect(await text(page, 'tag-status-word')).toBe('Live');
+    await screenshot(page, 'tags-detail-override-desktop');
+
+    await page.goto(`${baseUrl}/tags/${holder.id}`);
+    await page.getByTestId('tag-action-absence').click();
+    await page.getByTestId('absence-not-on-site').click();
+    await page.getByTestId('absence-attempts').fill('Phoned Rhian at 09:10 and 09:40, texted, asked the site office');
+    await page.getByTestId('absence-reason').fill('Bearing checked, pump needed back for the heating');
+    for (const k of ['workComplete', 'guardsRefitted', 'personnelClear', 'testedSafe']) await page.getByTestId(`check-${k}`).click();
+    await screenshot(page, 'tags-clear-in-absence-desktop');
+    await page.getByTestId('absence-submit').click();
+    await page.getByText('Tag cleared in the holder’s absence. The holder is to be told.').waitFor();
+    await expect(text(page, 'timeline-cleared-in-absence')).resolves.toMatch(/Phoned Rhian at 09:10[\s\S]*to be told before they resume work/);
+    await screenshot(page, 'tags-detail-cleared-desktop');
+
+    // The isolation is off but the override is still on: the item shows as overridden.
+    await page.getByTestId('tag-item-link').click();
+    await page.getByTestId('asset-tag-history').waitFor();
+    expect(await text(page, 'asset-state-word')).toBe('Overridden');
+    clean(w);
+    await w.context.close();
+  });
+  it('the on-coming engineer takes a tag over in one step, extends it and adds a note; each joins the history', async () => {
+    const tag = await api<Tag>(`/assets/${isolator.id}/tags`, await login('engineer@example.test'), {
+      kind: 'isolation',
+      reason: 'Rewire the boiler house panel',
+      expiresAt: new Date(Date.now() + 2 * 3600_000).toISOString(),
+      energySources: ['electrical'],
+      points: [{ description: 'Incoming supply, DB-1 way 4', method: 'fuse-withdrawn' }],
+      lockNumber: 'L-117',
+    });
+    const w = await signedIn(PHONE, 'engineer2@example.test', 'engineer');
+    const { page } = w;
+    await page.goto(`${baseUrl}/tags/${tag.id}`);
+    // OSHA 29 CFR 1910.147(f)(4): shift changes transfer the lockout between off-going and on-coming employees.
+    await page.getByTestId('tag-action-handover').click();
+    await page.getByTestId('handover-note').fill('Took over at shift change; lock L-117 swapped for L-204');
+    await page.getByTestId('handover-lock').fill('L-204');
+    await page.getByTestId('handover-phone').fill('+44 7700 900104');
+    await screenshot(page, 'tags-handover-phone');
+    await page.getByTestId('handover-submit').click();
+    await page.getByText('You now hold this tag.').waitFor();
+    await expect(text(page, 'tag-holder')).resolves.toBe('Rhian Castellane');
+
+    await page.getByTestId('tag-action-extend').click();
+    await page.getByTestId('extend-expiry-end-tomorrow').click();
+    await page.getByTestId('extend-reason').fill('Parts delayed until tomorrow');
+    await screenshot(page, 'tags-extend-phone');
+    await page.getByTestId('extend-submit').click();
+    await page.getByText('Expiry extended.').waitFor();
+
+    await page.getByTestId('tag-action-note').click();
+    await page.getByTestId('note-text').fill('Spare fuses are in the store');
+    await page.getByTestId('note-submit').click();
+    await page.getByText('Note added to the history.').waitFor();
+    await expect(text(page, 'timeline-handed-over')).resolves.toMatch(/Kofi Marchetti handed over to Rhian Castellane[\s\S]*L-204/);
+    await expect(text(page, 'timeline-extended')).resolves.toMatch(/Expiry moved from .* to .*23:59 \(Europe\/London\)[\s\S]*Parts delayed/);
+    await expect(text(page, 'timeline-note-added')).resolves.toContain('Spare fuses are in the store');
+    await page.getByTestId('tag-timeline').scrollIntoViewIfNeeded();
+    await screenshot(page, 'tags-timeline-phone');
+    clean(w);
+    await w.context.close();
+  });
+});
