@@ -7,6 +7,7 @@ import { PhotoThumb } from '@/components/ui/photo-thumb';
 import { Text } from '@/components/ui/text';
 import { ASSET_TYPE_ICONS } from '@/components/register/register-vocabulary';
 import { ServiceBadge } from '@/components/register/service-badge';
+import { TagStateBadge } from '@/components/tags/tag-state-badge';
 import { ASSET_TYPE_LABELS } from '@/shared/rules/register';
 import type { Asset } from '@/shared/types/register';
 
@@ -33,6 +34,7 @@ export function AssetCard({ asset, showPlace = true }: { asset: Asset; showPlace
             </View>
           ) : null}
           <View style={[styles.line, { flexWrap: 'wrap' }]}>
+            <TagStateBadge summary={asset} hideNormal testID={`asset-state-${asset.plantId}`} />
             <ServiceBadge asset={asset} compact />
             {asset.archived ? <Badge tone="neutral" icon="archive-outline" label="Archived" /> : null}
           </View>

@@ -1,7 +1,13 @@
 import { AssetTagsPanel } from '@/components/tags/asset-tags-panel';
+import { PointUseNotice } from '@/components/tags/point-use-notice';
 import type { Asset } from '@/shared/types/register';
 
-/** The item's live state on its record: its tags, state banner and tag history. */
+/** The item's live state on its record: where it is an isolation point, its tags, state banner and tag history. */
 export function AssetStateSlot({ asset }: { asset: Asset }) {
-  return <AssetTagsPanel asset={asset} />;
+  return (
+    <>
+      <PointUseNotice uses={asset.pointUses ?? []} />
+      <AssetTagsPanel asset={asset} />
+    </>
+  );
 }

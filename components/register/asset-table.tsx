@@ -1,4 +1,5 @@
 import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { TagStateBadge } from '@/components/tags/tag-state-badge';
 import { Link, useRouter } from 'expo-router';
 import { View } from 'react-native';
 import { colors, space } from '@/components/theme';
@@ -88,6 +89,7 @@ export function AssetTable({ rows, sort, onSort, paging, busy, editing }: Props)
     );
   } else {
     columns.push(
+      { key: 'state', title: 'Tags', width: 150, render: (a) => <TagStateBadge summary={a} /> },
       { key: 'lastServiceDate', title: 'Last service', width: 120, render: (a) => formatDate(a.lastServiceDate) },
       { key: 'nextServiceDue', title: 'Service', width: 150, sortable: true, render: (a) => <ServiceBadge asset={a} compact /> },
     );

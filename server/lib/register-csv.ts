@@ -46,9 +46,20 @@ export const guardCell = (s: string) => (FORMULA_START.test(s) ? `'${s}` : s);
 export const unguardCell = (s: string) => (s.startsWith("'") && FORMULA_START.test(s) ? s.slice(1) : s);
 
 /** UTF-8 with a byte-order mark, so spreadsheet programs read °C and accents correctly. */
-export function writeRegisterCsv(rows: Record<string, string>[]): string {
-  const body = stringify([REGISTER_COLUMNS, ...rows.map((r) => REGISTER_COLUMNS.map((c) => guardCell(r[c] ?? '')))], { record_delimiter: '\r\n' });
+/**
+ * Writes the register; `extraColumns` (e.g. the latest readings) are for reading only: an import skips them,
+ * so an exported file still imports back unchanged.
+ */
+export function writeRegisterCsv(rows: Record<string, string>[], extraColumns: string[] = []): string {
+  const columns = [...REGISTER_COLUMNS, ...extraColumns];
+  const body = stringify([columns, ...rows.map((r) => columns.map((c) => guardCell(r[c] ?? '')))], { record_delimiter: '\r\n' });
   return `\uFEFF${body}`;
+}
+
+const exportOnly = new Set<string>();
+/** Registers columns that exports carry for information and imports ignore. */
+export function registerExportOnlyColumns(headers: string[]) {
+  for (const h of headers) exportOnly.add(squash(h));
 }
 
 export interface CsvRecord {
@@ -72,7 +83,7 @@ export function readRegisterCsv(input: Buffer): { records: CsvRecord[]; columns:
   const header = table[0] ?? [];
   const columns: (string | null)[] = header.map((h) => HEADER_LOOKUP.get(squash(h)) ?? null);
   header.forEach((h, i) => {
-    if (!h.trim()) return;
+    if (!h.trim() || exportOnly.has(squash(h))) return;
     if (!columns[i]) errors.push({ row: 1, column: h, message: `Unknown column. Columns: ${REGISTER_COLUMNS.join(', ')}.` });
     else if (columns.indexOf(columns[i]) !== i) errors.push({ row: 1, column: h, message: 'This column appears twice.' });
   });

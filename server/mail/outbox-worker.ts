@@ -40,7 +40,7 @@ export interface OutboxWorkerOptions {
 }
 
 export interface OutboxWorker {
-  /** Claims and sends one batch of due mail; returns how many were sent and how many failed this time. */
+  /** Claims and sends one batch of due mail; returns how many were sent and how many attempts failed this time. */
   runOnce(): Promise<{ sent: number; failed: number }>;
   /** Runs batches every `mail.pollMs` until stopped. */
   start(): void;
@@ -57,9 +57,8 @@ export function createOutboxWorker(opts: OutboxWorkerOptions): OutboxWorker {
    * Safe with several processes: one UPDATE … LIMIT marks due, unclaimed rows with a claim id unique to this
    * batch (the row locks make two concurrent UPDATEs take disjoint rows), then only rows carrying that id are read.
    */
-  async function claim(): Promise<OutboxRow[]> {
+  async function claim(claimId: string): Promise<OutboxRow[]> {
     const now = clock.now();
-    const claimId = `${name}/${crypto.randomBytes(6).toString('hex')}`;
     await sequelize.query(
       `UPDATE outbox SET claimed_by = ?, claimed_until = ?
        WHERE sent_at IS NULL AND failed_at IS NULL AND next_attempt_at <= ? AND (claimed_until IS NULL OR claimed_until < ?)
@@ -72,7 +71,18 @@ export function createOutboxWorker(opts: OutboxWorkerOptions): OutboxWorker {
     });
   }
 
-  async function deliver(row: OutboxRow): Promise<boolean> {
+  /** 'unreachable' means the mail server could not be reached at all: the rest of the batch would fail the same way. */
+  async function deliver(row: OutboxRow, claimId: string): Promise<'sent' | 'failed' | 'unreachable' | 'lost-claim'> {
+    // Renew the claim just before sending, so a slow batch is never overtaken by another process.
+    await sequelize.query('UPDATE outbox SET claimed_until = ? WHERE id = ? AND claimed_by = ? AND sent_at IS NULL', {
+      replacements: [new Date(clock.now().getTime() + CLAIM_MS), row.id, claimId],
+    });
+    // Read back rather than trust the affected-row count, which is 0 when the new time equals the old one.
+    const [current] = await sequelize.query<{ claimedBy: string | null; sentAt: Date | null }>('SELECT claimed_by AS claimedBy, sent_at AS sentAt FROM outbox WHERE id = ?', {
+      replacements: [row.id],
+      type: QueryTypes.SELECT,
+    });
+    if (!current || current.claimedBy !== claimId || current.sentAt) return 'lost-claim';
     const payload = typeof row.payload === 'string' ? (JSON.parse(row.payload) as Record<string, unknown>) : row.payload;
     const attempts = row.attempts + 1;
     try {
@@ -84,7 +94,7 @@ export function createOutboxWorker(opts: OutboxWorkerOptions): OutboxWorker {
          WHERE id = ? AND sent_at IS NULL`,
         { replacements: [clock.now(), attempts, row.id] },
       );
-      return true;
+      return 'sent';
     } catch (err) {
       const e = err as Error & { responseCode?: number; code?: string };
       const refused = typeof e.responseCode === 'number' && e.responseCode >= 500;
@@ -97,15 +107,26 @@ export function createOutboxWorker(opts: OutboxWorkerOptions): OutboxWorker {
         { replacements: [attempts, refusals, new Date(now.getTime() + backoffMs(attempts)), `${e.code ?? e.responseCode ?? 'error'}: ${e.message}`.slice(0, 1000), giveUp ? now : null, row.id] },
       );
       logger.warn({ outboxId: row.id, kind: row.kind, attempts, code: e.code ?? e.responseCode, giveUp }, giveUp ? 'mail refused; given up' : 'mail not sent; will retry');
-      return false;
+      return e.responseCode === undefined ? 'unreachable' : 'failed';
     }
   }
 
   async function runOnce() {
-    const rows = await claim();
+    const claimId = `${name}/${crypto.randomBytes(6).toString('hex')}`;
+    const rows = await claim(claimId);
     let sent = 0;
-    for (const row of rows) if (await deliver(row)) sent += 1;
-    return { sent, failed: rows.length - sent };
+    let failed = 0;
+    for (const row of rows) {
+      const outcome = await deliver(row, claimId);
+      if (outcome === 'sent') sent += 1;
+      else if (outcome !== 'lost-claim') failed += 1;
+      if (outcome === 'unreachable') {
+        // Hand the rest back untouched; the next poll tries again with one message, not a whole batch of timeouts.
+        await sequelize.query('UPDATE outbox SET claimed_by = NULL, claimed_until = NULL WHERE claimed_by = ? AND sent_at IS NULL', { replacements: [claimId] });
+        break;
+      }
+    }
+    return { sent, failed };
   }
 
   let timer: NodeJS.Timeout | null = null;

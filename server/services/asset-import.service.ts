@@ -1,6 +1,7 @@
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import { ValidationError } from 'yup';
-import { ATTRIBUTE_KEYS, BASE_COLUMNS, readRegisterCsv, writeRegisterCsv } from '@/server/lib/register-csv';
+import { ATTRIBUTE_KEYS, BASE_COLUMNS, readRegisterCsv, registerExportOnlyColumns, writeRegisterCsv } from '@/server/lib/register-csv';
+import { READING_EXPORT_COLUMNS, latestReadingsForExport } from '@/server/services/readings-export';
 import type { AuthUser } from '@/server/middleware/auth';
 import { Asset } from '@/server/models/asset.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
@@ -12,6 +13,7 @@ import { attributeSchemas } from '@/shared/schemas/register';
 import type { ImportResult, ImportRowError } from '@/shared/types/register';
 
 const key = (s: string) => s.trim().toLowerCase();
+registerExportOnlyColumns(READING_EXPORT_COLUMNS.map((c) => c.header));
 const TYPE_LOOKUP = new Map<string, AssetType>(ASSET_TYPES.flatMap((t) => [[key(t), t], [key(ASSET_TYPE_LABELS[t]), t]] as [string, AssetType][]));
 
 /** The register (items in service) as CSV rows; archived items are left out. */
@@ -28,8 +30,10 @@ export async function exportRegisterCsv(actor: AuthUser, filters: { siteId: numb
     order: [[{ model: Site, as: 'site' }, 'name', 'ASC'], ['plantId', 'ASC']],
   });
   const text = (v: unknown) => (v === null || v === undefined ? '' : String(v));
+  const readings = await latestReadingsForExport(actor.organisationId);
   return writeRegisterCsv(
     assets.map((a) => ({
+      ...Object.fromEntries(READING_EXPORT_COLUMNS.map((c) => [c.header, c.value(readings.get(a.id))])),
       site: a.site!.name,
       plantRoom: a.plantRoom?.name ?? '',
       plantId: a.plantId,
@@ -46,6 +50,7 @@ export async function exportRegisterCsv(actor: AuthUser, filters: { siteId: numb
       notes: a.notes,
       ...Object.fromEntries(ATTRIBUTE_KEYS.map((k) => [`attributes.${k}`, text(a.attributes[k])])),
     })),
+    READING_EXPORT_COLUMNS.map((c) => c.header),
   );
 }
 

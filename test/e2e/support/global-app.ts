@@ -25,7 +25,8 @@ export default async function setup(project: TestProject) {
   await migrate(sequelize);
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
-  const config = readConfig({ PORT: String(port), DATA_DIR: dataDir }, { jwtSecret: 'e2e-secret', publicUrl: baseUrl });
+  // Every e2e test signs the demo users in afresh; the sign-in rate limit itself is covered by the API tests.
+  const config = readConfig({ PORT: String(port), DATA_DIR: dataDir }, { jwtSecret: 'e2e-secret', publicUrl: baseUrl, loginRateLimit: { max: 10_000, windowMs: 60_000 } });
   // Demo photos go where this app reads them (the throwaway DATA_DIR), not the environment's default.
   await seedDemo(sequelize, { storage: createPhotoStorage(config) });
   if (!fs.existsSync(path.join(config.webDir!, 'index.html'))) throw new Error('dist/index.html is missing: build the web app first (npm test does)');

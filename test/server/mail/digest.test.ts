@@ -6,7 +6,7 @@ import { runDigests } from '@/server/mail/digest';
 import { createOrganisation, tokenFor, type OrgUsers } from '@/test/setup/app';
 import { createSiteWithAssets } from '@/test/setup/register-fixtures';
 import { insertTag } from '@/test/server/support/tag-fixtures';
-import { outboxRows, setupMailTestApp, TEST_PUBLIC_URL } from '@/test/server/mail/mail-test-app';
+import { outboxRows, setupMailTestApp, TEST_PUBLIC_URL } from '@/test/server/support/mail-test-app';
 
 // 07:02 on 15 January in London (GMT, UTC+0 in winter); 16:02 the same day in Tokyo (UTC+9, no DST) — IANA tz database via Intl.
 const LONDON_MORNING = new Date('2025-01-15T07:02:00.000Z');

@@ -2,7 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readMailConfig } from '@/server/config';
 import { startServer } from '@/server/index';
-import { createOrganisation, setupTestApp, tokenFor, type TestApp } from '@/test/setup/app';
+import { createOrganisation, setupTestApp, TEST_PASSWORD, type TestApp } from '@/test/setup/app';
 import { createSiteWithAssets } from '@/test/setup/register-fixtures';
 import { MailInbox } from '@/test/support/mail-inbox';
 
@@ -26,7 +26,8 @@ describe('startServer', () => {
   it('runs the outbox worker itself: a raised tag’s e-mail arrives without anyone calling it', async () => {
     const org = await createOrganisation('poplar');
     const plant = await createSiteWithAssets(org.organisation.id, org.users.supervisor.id, { name: 'Poplar Baths' });
-    const token = await tokenFor(running.server, org.users.engineer);
+    const login = await request(running.server).post('/api/auth/login').send({ email: org.users.engineer.email, password: TEST_PASSWORD });
+    const token = login.body.token as string;
     const res = await request(running.server).post(`/api/assets/${plant.boiler.id}/tags`).set('Authorization', `Bearer ${token}`).send({
       kind: 'override', reason: 'Boiler held on for flue analysis', expiresAt: new Date(Date.now() + 3600_000).toISOString(), normalState: 'Time clock', leftState: 'Held on',
     });

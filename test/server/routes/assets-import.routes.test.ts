@@ -1,6 +1,10 @@
 import { parse } from 'csv-parse/sync';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { REGISTER_COLUMNS } from '@/server/lib/register-csv';
+import { READING_EXPORT_COLUMNS } from '@/server/services/readings-export';
+
+// The export adds the latest readings after the register columns; imports skip them.
+const EXPORT_COLUMNS = [...REGISTER_COLUMNS, ...READING_EXPORT_COLUMNS.map((c) => c.header)];
 import { Asset } from '@/server/models/asset.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
@@ -128,7 +132,7 @@ describe('GET /api/assets/export.csv', () => {
     expect(exported.headers['content-disposition']).toMatch(/attachment; filename="isoledger-register-\d{4}-\d{2}-\d{2}\.csv"/);
     const text = exported.text;
     const table: string[][] = parse(text, { bom: true });
-    expect(table[0]).toEqual(REGISTER_COLUMNS);
+    expect(table[0]).toEqual(EXPORT_COLUMNS);
     expect(table.slice(1).map((r) => r[2]).sort()).toEqual(['B-01', 'CAL-01', 'EV-01', 'O-01', 'P-20A']);
     const o01 = table.find((r) => r[2] === 'O-01')!;
     // Cells a spreadsheet would run as formulas start with ' (OWASP, "CSV Injection").
@@ -146,6 +150,6 @@ describe('GET /api/assets/export.csv', () => {
 
   it('exports only the caller’s organisation', async () => {
     const text = (await birch.get('/api/assets/export.csv')).text;
-    expect(parse(text, { bom: true })).toEqual([REGISTER_COLUMNS]);
+    expect(parse(text, { bom: true })).toEqual([EXPORT_COLUMNS]);
   });
 });

@@ -5,7 +5,7 @@ import { AuditEvent } from '@/server/models/audit-event.model';
 import { User } from '@/server/models/user.model';
 import { createOrganisation, tokenFor, TEST_PASSWORD, type OrgUsers } from '@/test/setup/app';
 import { createSiteWithAssets } from '@/test/setup/register-fixtures';
-import { setupMailTestApp, TEST_PUBLIC_URL } from '@/test/server/mail/mail-test-app';
+import { setupMailTestApp, TEST_PUBLIC_URL } from '@/test/server/support/mail-test-app';
 
 let env: Awaited<ReturnType<typeof setupMailTestApp>>;
 let u: OrgUsers;

@@ -11,6 +11,8 @@ import { Notice } from '@/components/ui/notice';
 import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
+import { AssetLabelCard } from '@/components/labels/asset-label-card';
+import { AssetReadingsSection } from '@/components/readings/asset-readings-section';
 import { AssetDetails } from '@/components/register/asset-details';
 import { AssetStateSlot } from '@/components/register/asset-state-slot';
 import { Breadcrumbs } from '@/components/register/breadcrumbs';
@@ -55,10 +57,12 @@ export default function AssetScreen() {
             {a.archived ? <Notice tone="info" word="Archived">This item is no longer in service. Its record is kept for history.</Notice> : null}
             <AssetStateSlot asset={a} />
             <AssetDetails asset={a} />
+            <AssetReadingsSection asset={a} />
             <Card>
               <Text variant="title">Photos</Text>
               <PhotoGallery photos={a.photos ?? []} subject={a.plantId} onAdd={perms.canAdd && !a.archived ? (p) => addPhoto.mutateAsync(p) : undefined} adding={addPhoto.isPending} />
             </Card>
+            <AssetLabelCard asset={a} />
             <Text variant="small" muted>{`Added by ${a.createdBy.name}`}</Text>
             <ConfirmDialog
               visible={confirming}

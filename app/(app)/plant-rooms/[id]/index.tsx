@@ -1,4 +1,5 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
+import { PrintLabelsButtons } from '@/components/labels/print-labels-buttons';
 import { View } from 'react-native';
 import { space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
@@ -50,6 +51,13 @@ export default function PlantRoomScreen() {
               <AssetList items={items.data.items} total={items.data.total} busy={items.isFetching} showPlace={false} emptyTitle="No items in this room yet" emptyText={perms.canAdd ? 'Use “Add item” to record the plant here.' : 'Nothing has been recorded here.'} />
             ) : <LoadingView />}
           </View>
+          {items.data?.total ? (
+            <Card>
+              <Text variant="title">QR labels for this room</Text>
+              <Text muted variant="small">One label for every item in the room, to print and stick on the plant.</Text>
+              <PrintLabelsButtons selection={{ plantRoomId: id }} fileStem={r.name.replace(/\W+/g, '-').toLowerCase()} />
+            </Card>
+          ) : null}
           <Card>
             <Text variant="title">Photos</Text>
             <PhotoGallery photos={r.photos ?? []} subject={r.name} onAdd={perms.canAdd ? (a) => addPhoto.mutateAsync(a) : undefined} adding={addPhoto.isPending} />

@@ -1,4 +1,5 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
+import { PrintLabelsButtons } from '@/components/labels/print-labels-buttons';
 import { View } from 'react-native';
 import { space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
@@ -44,6 +45,13 @@ export default function SiteScreen() {
             {rooms.isError ? <Notice tone="danger" word="Cannot load">{errorMessage(rooms.error)}</Notice> : null}
             {rooms.data ? <PlantRoomList rooms={rooms.data.items} /> : rooms.isPending ? <LoadingView /> : null}
           </View>
+          {s.assetCount ? (
+            <Card>
+              <Text variant="title">QR labels for this site</Text>
+              <Text muted variant="small">{`${s.assetCount} labels, ordered by plant room and plant ID.`}</Text>
+              <PrintLabelsButtons selection={{ siteId: id }} fileStem={s.name.replace(/\W+/g, '-').toLowerCase()} compact />
+            </Card>
+          ) : null}
           <Card>
             <Text variant="title">Site details</Text>
             <DetailList
