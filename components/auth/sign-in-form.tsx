@@ -1,4 +1,5 @@
 import { Formik } from 'formik';
+import { Link } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 import { colors, radius, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
@@ -62,6 +63,9 @@ export function SignInForm() {
               testID="sign-in-password"
             />
             <Button title="Sign in" onPress={() => handleSubmit()} busy={isSubmitting} testID="sign-in-submit" />
+            <Link href="/forgot-password" testID="sign-in-forgot">
+              <Text style={{ color: colors.brand, textDecorationLine: 'underline' }}>Forgot password?</Text>
+            </Link>
           </View>
         )}
       </Formik>

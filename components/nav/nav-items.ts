@@ -16,6 +16,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/scan', label: 'Scan', icon: 'qrcode-scan', roles: everyone },
   { href: '/assets', label: 'Register', icon: 'file-tree-outline', roles: everyone },
   { href: '/board', label: 'Board', icon: 'view-dashboard-outline', roles: ['admin', 'supervisor', 'viewer'] },
+  { href: '/team', label: 'Team', icon: 'account-group-outline', roles: ['admin'] },
   { href: '/settings', label: 'Settings', icon: 'account-cog-outline', roles: everyone },
 ];
 

@@ -1,4 +1,6 @@
 import type { Sequelize } from 'sequelize';
+import { Site } from '@/server/models/site.model';
+import { UserSiteAccess } from '@/server/models/user-site-access.model';
 import { Organisation } from '@/server/models/organisation.model';
 import { User } from '@/server/models/user.model';
 import { hashPassword } from '@/server/services/auth.service';
@@ -36,6 +38,13 @@ export async function seedDemo(sequelize: Sequelize, opts: { bcryptCost?: number
       if (!authors.supervisor || !authors.engineer || !authors.engineer2) return false;
       const seeded = await seedDemoRegister({ organisationId, authors, storage, transaction });
       await seedDemoReadings({ organisationId, authors, transaction });
+      const viewer = users.find((u) => u.email === 'viewer@example.test');
+      if (seeded && viewer) {
+        // The demo viewer (a client's facilities manager, say) is given two of the three sites.
+        const sites = await Site.findAll({ where: { organisationId }, order: [['name', 'ASC']], transaction });
+        const grantedBy = users.find((u) => u.email === 'admin@example.test')?.id ?? null;
+        await UserSiteAccess.bulkCreate(sites.slice(0, 2).map((site) => ({ userId: viewer.id, siteId: site.id, grantedBy })), { transaction });
+      }
       return seeded;
     };
     const existing = await Organisation.findOne({ where: { name: DEMO_ORGANISATION }, transaction, lock: transaction.LOCK.UPDATE });

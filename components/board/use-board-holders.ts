@@ -1,0 +1,31 @@
+import { useEffect, useMemo, useState } from 'react';
+import type { SelectOption } from '@/components/ui/select-field';
+import { useMeQuery } from '@/hooks/api/use-auth';
+import { useTeamQuery } from '@/hooks/api/use-team';
+import { isSupervisory } from '@/shared/rules/roles';
+import type { BoardRow } from '@/shared/types/board';
+
+/**
+ * People to filter the board by. Supervisors and admins may list the team; viewers may not, so for them the
+ * choice is the holders the board has shown so far.
+ */
+export function useBoardHolders(rows: BoardRow[]): SelectOption<number>[] {
+  const role = useMeQuery().data?.role;
+  const supervisory = !!role && isSupervisory(role);
+  const team = useTeamQuery(supervisory);
+  const [seen, setSeen] = useState<Map<number, string>>(new Map());
+  useEffect(() => {
+    if (supervisory) return;
+    setSeen((prev) => {
+      const fresh = rows.filter((r) => !prev.has(r.author.id));
+      if (!fresh.length) return prev;
+      const next = new Map(prev);
+      for (const r of fresh) next.set(r.author.id, r.author.name);
+      return next;
+    });
+  }, [rows, supervisory]);
+  return useMemo(() => {
+    const people = supervisory ? (team.data?.items ?? []).map((u) => ({ value: u.id, label: u.name })) : [...seen].map(([value, label]) => ({ value, label }));
+    return people.sort((a, b) => a.label.localeCompare(b.label));
+  }, [supervisory, team.data, seen]);
+}
