@@ -1,4 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { ImagePickerAsset } from 'expo-image-picker';
+import { photoFormData } from '@/hooks/api/use-photos';
 import { RequestError, request } from '@/hooks/api/request';
 import { assetKeys } from '@/hooks/api/use-assets';
 import type { TagStatus } from '@/shared/rules/tags';
@@ -86,3 +88,12 @@ export const useExtendTagMutation = (id: number) => useTagAction<ExtendTagInput>
 /** Called by the on-coming person: they become the holder. */
 export const useHandoverTagMutation = (id: number) => useTagAction<HandoverInput>(id, 'handover');
 export const useAddTagNoteMutation = (id: number) => useTagAction<{ text: string }>(id, 'notes');
+
+/** A photo of the lock or tag in place, added to a live tag. */
+export function useAddTagPhotoMutation(id: number) {
+  const changed = useTagChanged();
+  return useMutation({
+    mutationFn: (asset: ImagePickerAsset) => request<Tag>(`/tags/${id}/photos`, { method: 'POST', body: photoFormData(asset) }),
+    onSuccess: changed,
+  });
+}

@@ -5,6 +5,7 @@ import { readings } from './0003-readings';
 import { tags } from './0004-tags';
 import { labels } from './0005-labels';
 import { notifications } from './0006-notifications';
+import { tagPhotos } from './0007-tag-photos';
 
 export interface Migration {
   name: string;
@@ -13,4 +14,4 @@ export interface Migration {
 }
 
 /** Every migration, in order. A new migration is a new file here, never an edit to an applied one. */
-export const migrations: Migration[] = [foundation, register, readings, tags, labels, notifications];
+export const migrations: Migration[] = [foundation, register, readings, tags, labels, notifications, tagPhotos];

@@ -7,6 +7,7 @@ export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes
   declare organisationId: number;
   declare assetId: number | null;
   declare plantRoomId: number | null;
+  declare tagId: CreationOptional<number | null>;
   declare storageKey: string;
   declare thumbnailKey: string;
   declare width: number;
@@ -24,6 +25,7 @@ export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes
         organisationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         assetId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         plantRoomId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        tagId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         storageKey: { type: DataTypes.STRING(200), allowNull: false },
         thumbnailKey: { type: DataTypes.STRING(200), allowNull: false },
         width: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },

@@ -3,11 +3,13 @@ import type { AppContext } from '@/server/app';
 import { auth, currentUser } from '@/server/middleware/auth';
 import { validate } from '@/server/middleware/validate';
 import { addTagNote, clearInAbsence, clearTag, extendTag, handOverTag } from '@/server/services/tag-actions.service';
-import { getTag, listTags, raiseTag } from '@/server/services/tags.service';
+import { addTagPhoto, getTag, listTags, raiseTag } from '@/server/services/tags.service';
+import { MAX_PHOTO_BYTES } from '@/server/lib/photo-processing';
+import { requireFile, singleFileUpload } from '@/server/lib/uploads';
 import { readPaging } from '@/shared/rules/paging';
 import { clearInAbsenceSchema, clearTagSchema, extendTagSchema, handoverSchema, raiseTagSchema, tagNoteSchema } from '@/shared/schemas/tags';
 
-export function tagsRoutes({ config, sequelize }: AppContext) {
+export function tagsRoutes({ config, sequelize, storage }: AppContext) {
   const router = Router();
   const authed = auth(config.jwtSecret);
   const id = (raw: unknown) => Number(raw);
@@ -35,6 +37,11 @@ export function tagsRoutes({ config, sequelize }: AppContext) {
   });
   router.post('/tags/:id/handover', authed, validate(handoverSchema), async (req, res) => {
     res.json(await handOverTag(sequelize, currentUser(req), id(req.params.id), req.body));
+  });
+  router.post('/tags/:id/photos', authed, singleFileUpload('photo', MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
+    const file = requireFile(req, 'photo', 'photo');
+    const caption = typeof req.body?.caption === 'string' ? req.body.caption.trim().slice(0, 200) || null : null;
+    res.status(201).json(await addTagPhoto(sequelize, storage!, currentUser(req), id(req.params.id), file.buffer, caption));
   });
   router.post('/tags/:id/notes', authed, validate(tagNoteSchema), async (req, res) => {
     res.status(201).json(await addTagNote(sequelize, currentUser(req), id(req.params.id), req.body.text));

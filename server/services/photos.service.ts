@@ -13,7 +13,7 @@ import type { Photo as PhotoDto } from '@/shared/types/register';
 
 const withCreator = { model: User, as: 'creator', attributes: ['id', 'name'] };
 
-export async function photosOf(owner: 'assetId' | 'plantRoomId', ids: number[], transaction?: Transaction): Promise<Map<number, Photo[]>> {
+export async function photosOf(owner: 'assetId' | 'plantRoomId' | 'tagId', ids: number[], transaction?: Transaction): Promise<Map<number, Photo[]>> {
   const byOwner = new Map<number, Photo[]>(ids.map((id) => [id, []]));
   if (!ids.length) return byOwner;
   const photos = await Photo.findAll({ where: { [owner]: { [Op.in]: ids } }, include: [withCreator], order: [['id', 'ASC']], transaction });
@@ -67,7 +67,7 @@ export async function addPhoto(
 /** Re-encodes an image (processPhoto), writes it and its thumbnail to storage, and records it. */
 export async function storePhoto(
   storage: PhotoStorage,
-  row: { organisationId: number; assetId?: number; plantRoomId?: number; createdBy: number; caption: string | null },
+  row: { organisationId: number; assetId?: number; plantRoomId?: number; tagId?: number; createdBy: number; caption: string | null },
   input: Buffer,
   transaction?: Transaction,
 ): Promise<Photo> {
@@ -80,6 +80,7 @@ export async function storePhoto(
       organisationId: row.organisationId,
       assetId: row.assetId ?? null,
       plantRoomId: row.plantRoomId ?? null,
+      tagId: row.tagId ?? null,
       storageKey: `${base}.jpg`,
       thumbnailKey: `${base}-thumb.jpg`,
       width: processed.width,

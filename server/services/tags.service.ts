@@ -7,6 +7,9 @@ import { Tag } from '@/server/models/tag.model';
 import { TagEvent } from '@/server/models/tag-event.model';
 import { TagPoint } from '@/server/models/tag-point.model';
 import { loadEvents, tagInclude, toTagDto } from '@/server/services/tag-dto';
+import { photosOf, storePhoto } from '@/server/services/photos.service';
+import { toPhotoDto } from '@/server/services/register-dto';
+import type { PhotoStorage } from '@/server/lib/photo-storage';
 import { enqueueTagMail } from '@/server/mail/tag-mail';
 import { expiryProblem, mayRaise, type TagEventType } from '@/shared/rules/tags';
 import type { RaiseTagInput } from '@/shared/schemas/tags';
@@ -26,7 +29,21 @@ async function findAsset(actor: AuthUser, assetId: number, transaction?: Transac
 export async function getTag(actor: AuthUser, id: number): Promise<TagDto> {
   const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId }, include: tagInclude }) : null;
   if (!tag) throw notFound('Tag');
-  return toTagDto(tag, await loadEvents(tag.id));
+  const photos = (await photosOf('tagId', [tag.id])).get(tag.id) ?? [];
+  return { ...toTagDto(tag, await loadEvents(tag.id)), photoCount: photos.length, photos: photos.map(toPhotoDto) };
+}
+
+/** Adds a photo of the lock or tag in place to a live tag, and records it in the tag's history. */
+export async function addTagPhoto(sequelize: Sequelize, storage: PhotoStorage, actor: AuthUser, id: number, file: Buffer, caption: string | null): Promise<TagDto> {
+  if (actor.role === 'viewer') throw new HttpError(403, 'forbidden', 'Viewers cannot add photos.');
+  const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId } }) : null;
+  if (!tag) throw notFound('Tag');
+  if (tag.status !== 'live') throw new HttpError(409, 'already-cleared', 'This tag has been cleared; it takes no new photos.');
+  await sequelize.transaction(async (transaction) => {
+    const photo = await storePhoto(storage, { organisationId: actor.organisationId, tagId: tag.id, createdBy: actor.id, caption }, file, transaction);
+    await appendEvent(tag, 'photo-added', actor, { photoId: photo.id, caption }, transaction);
+  });
+  return getTag(actor, id);
 }
 
 /**
@@ -111,7 +128,8 @@ export async function listTags(actor: AuthUser, filters: TagFilters, paging: { p
   if (filters.assetId) Object.assign(where, { assetId: filters.assetId });
   const include = tagInclude.map((inc) => (inc.as === 'asset' && filters.siteId ? { ...inc, where: { siteId: filters.siteId }, required: true } : inc));
   const { rows, count } = await Tag.findAndCountAll({ where, include, order: [['status', 'DESC'], ['raisedAt', 'DESC']], limit: paging.pageSize, offset: paging.offset, distinct: true });
-  return { items: rows.map((t) => toTagDto(t)), total: count, page: paging.page, pageSize: paging.pageSize };
+  const photos = await photosOf('tagId', rows.map((t) => t.id));
+  return { items: rows.map((t) => ({ ...toTagDto(t), photoCount: photos.get(t.id)?.length ?? 0 })), total: count, page: paging.page, pageSize: paging.pageSize };
 }
 
 /** Locks the tag row for the rest of the transaction; another organisation's tag is a 404. */

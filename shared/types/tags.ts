@@ -1,4 +1,5 @@
 import type { EnergySource } from '@/shared/rules/register';
+import type { Photo } from '@/shared/types/register';
 import type { IsolationMethod, ReleaseCheck, TagEventType, TagKind, TagStatus } from '@/shared/rules/tags';
 
 export interface PersonRef {
@@ -49,6 +50,8 @@ export interface Tag {
   clearedBy: PersonRef | null;
   checks: Partial<Record<ReleaseCheck, boolean>> | null;
   photoCount: number;
+  /** Single tag only: photos of the lock or tag in place. */
+  photos?: Photo[];
   events?: TagEvent[];
 }
 

@@ -12,7 +12,8 @@ import { TagHeader } from '@/components/tags/tag-header';
 import { TagTimeline } from '@/components/tags/tag-timeline';
 import { useNow } from '@/components/tags/use-now';
 import { useMeQuery } from '@/hooks/api/use-auth';
-import { useTagQuery } from '@/hooks/api/use-tags';
+import { PhotoGallery } from '@/components/register/photo-gallery';
+import { useAddTagPhotoMutation, useTagQuery } from '@/hooks/api/use-tags';
 
 export default function TagScreen() {
   const params = useLocalSearchParams<{ id: string }>();
@@ -20,6 +21,7 @@ export default function TagScreen() {
   const me = useMeQuery().data;
   const now = useNow();
   const { isWide } = useBreakpoints();
+  const addPhoto = useAddTagPhotoMutation(Number(params.id) || 0);
 
   return (
     <QueryScreen query={tag} title="Tag">
@@ -32,6 +34,13 @@ export default function TagScreen() {
           </Card>
         );
         const actions = me ? <TagActions tag={t} me={me} /> : null;
+        const canAddPhoto = t.status === 'live' && !!me && me.role !== 'viewer';
+        const photos = (
+          <Card>
+            <Text variant="title">Photos of the lock or tag</Text>
+            <PhotoGallery photos={t.photos ?? []} subject={`tag ${t.id}`} onAdd={canAddPhoto ? (p) => addPhoto.mutateAsync(p) : undefined} adding={addPhoto.isPending} />
+          </Card>
+        );
         // A cleared tag has nothing left to do: its history takes the second column.
         const live = t.status === 'live';
         return (
@@ -41,6 +50,7 @@ export default function TagScreen() {
               <View style={{ flexDirection: 'row', gap: space.lg, alignItems: 'flex-start' }}>
                 <View style={{ flex: 3, gap: space.lg }}>
                   <TagFacts tag={t} />
+                  {photos}
                   {live ? history : null}
                 </View>
                 <View style={{ flex: 2, gap: space.lg }}>
@@ -52,6 +62,7 @@ export default function TagScreen() {
               <>
                 {actions}
                 <TagFacts tag={t} />
+                {photos}
                 {history}
               </>
             )}

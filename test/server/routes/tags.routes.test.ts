@@ -1,4 +1,5 @@
 import request from 'supertest';
+import sharp from 'sharp';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { clock } from '@/server/lib/clock';
 import { Tag } from '@/server/models/tag.model';
@@ -281,6 +282,25 @@ describe('item state in the register', () => {
     expect(byPlantId).toEqual({ 'B-01': 'overridden', 'E-01': 'normal', 'P-01': 'isolated', 'V-01': 'normal' });
     clock.now = () => new Date(Date.now() + 8 * 3600_000);
     expect((await as('viewer').get(`/api/assets/${fresh.pump.id}`)).body).toMatchObject({ state: 'isolated', overdue: true });
+  });
+});
+
+describe('POST /api/tags/:id/photos', () => {
+  it('adds a photo of the lock in place to a live tag and records it in the history', async () => {
+    const tag = await raise();
+    const png = await sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 200, g: 30, b: 30 } } }).png().toBuffer();
+    expect((await request(t.app).post(`/api/tags/${tag.id}/photos`).set('Authorization', `Bearer ${tok.viewer}`).attach('photo', png, 'lock.png')).status).toBe(403);
+    const res = await request(t.app).post(`/api/tags/${tag.id}/photos`).set('Authorization', `Bearer ${tok.engineer}`).attach('photo', png, 'lock.png');
+    expect(res.status).toBe(201);
+    expect(res.body.photoCount).toBe(1);
+    expect(res.body.photos[0]).toMatchObject({ width: 64, height: 48, url: expect.stringMatching(/^\/api\/photos\/\d+$/) });
+    expect(res.body.events.at(-1)).toMatchObject({ type: 'photo-added', by: { id: u.engineer.id } });
+    const img = await request(t.app).get(res.body.photos[0].url).set('Authorization', `Bearer ${tok.viewer}`);
+    expect(img.status).toBe(200);
+    expect(img.headers['content-type']).toBe('image/jpeg');
+    expect((await as('viewer').get(`/api/tags?assetId=${plant.pump.id}&status=live`)).body.items.find((x: { id: number }) => x.id === tag.id).photoCount).toBe(1);
+    await as('engineer').post(`/api/tags/${tag.id}/clear`, { reason: 'Seal replaced and tested', checks: allChecks });
+    expect((await request(t.app).post(`/api/tags/${tag.id}/photos`).set('Authorization', `Bearer ${tok.engineer}`).attach('photo', png, 'lock.png')).status).toBe(409);
   });
 });
 
