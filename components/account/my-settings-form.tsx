@@ -69,8 +69,8 @@ export function MySettingsForm({ settings }: { settings: MySettings }) {
                   return (
                     <Pressable
                       key={k}
-                      accessibilityRole="checkbox"
-                      accessibilityState={{ checked: on }}
+                      role="checkbox"
+                      aria-checked={on}
                       accessibilityLabel={NOTIFICATION_LABELS[k]}
                       onPress={() => void setFieldValue(`notifications.${k}`, !on)}
                       style={StyleSheet.flatten([styles.option, on && styles.optionOn])}

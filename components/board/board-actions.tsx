@@ -2,11 +2,12 @@ import { MaterialCommunityIcons } from '@expo/vector-icons';
 import { useState } from 'react';
 import { ActivityIndicator, View } from 'react-native';
 import { colors, space } from '@/components/theme';
+import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
 import { clockTime } from '@/components/board/board-vocabulary';
 import { canPrint, printBoard } from '@/components/board/print-styles';
-import { saveBlob } from '@/components/labels/save-blob';
+import { saveFile } from '@/components/ui/save-file';
 import { errorMessage } from '@/hooks/api/request';
 import { fetchBoardCsv } from '@/hooks/api/use-board';
 import { localDate } from '@/shared/rules/time-zone';
@@ -22,13 +23,14 @@ interface Props {
 
 /** "Updated hh:mm:ss", CSV export of the current view and printing. */
 export function BoardActions({ query, updatedAt, fetching, onRefresh }: Props) {
+  const { isWide } = useBreakpoints();
   const [exporting, setExporting] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
   const exportCsv = async () => {
     setExporting(true);
     setProblem(null);
     try {
-      await saveBlob(await fetchBoardCsv(query), `isoledger-board-${localDate(new Date(), 'UTC')}.csv`);
+      saveFile(await fetchBoardCsv(query), `isoledger-board-${localDate(new Date(), 'UTC')}.csv`);
     } catch (err) {
       setProblem(errorMessage(err));
     } finally {
@@ -36,12 +38,12 @@ export function BoardActions({ query, updatedAt, fetching, onRefresh }: Props) {
     }
   };
   return (
-    <View style={{ gap: space.xs, alignItems: 'flex-end', flexShrink: 1 }}>
+    <View style={{ gap: space.xs, alignItems: isWide ? 'flex-end' : 'flex-start', flexShrink: 1 }}>
       <View style={{ flexDirection: 'row', alignItems: 'center', gap: space.xs }} accessibilityLiveRegion="polite">
         {fetching ? <ActivityIndicator color={colors.brand} accessibilityLabel="Refreshing" /> : <MaterialCommunityIcons name="update" size={18} color={colors.inkMuted} />}
         <Text variant="small" muted testID="board-updated">{updatedAt ? `Updated ${clockTime(updatedAt)}` : 'Loading…'}</Text>
       </View>
-      <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, justifyContent: 'flex-end' }} nativeID="board-actions">
+      <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, justifyContent: isWide ? 'flex-end' : 'flex-start' }} nativeID="board-actions">
         <Button title="Refresh" variant="quiet" onPress={onRefresh} testID="board-refresh" />
         <Button title="Export CSV" variant="secondary" busy={exporting} onPress={() => void exportCsv()} testID="board-export" />
         {canPrint ? <Button title="Print" variant="secondary" onPress={printBoard} testID="board-print" /> : null}

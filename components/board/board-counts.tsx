@@ -44,7 +44,7 @@ export function BoardCounts({ counts, siteId, state, onSite, onState }: Props) {
                 <MaterialCommunityIcons name={on ? 'check-circle' : 'office-building-outline'} size={20} color={on ? colors.brandInk : colors.ink} />
                 <Text variant="label" bold style={{ color: on ? colors.brandInk : colors.ink }} numberOfLines={1}>{s.siteName}</Text>
                 <Text variant="label" style={{ color: on ? colors.brandInk : colors.ink }}>
-                  {`${s.total}${s.overdue ? ` · ${s.overdue} overdue` : ''}`}
+                  {`· ${s.total} live${s.overdue ? `, ${s.overdue} overdue` : ''}`}
                 </Text>
               </Pressable>
             );
@@ -67,10 +67,10 @@ function Tile({ label, value, icon, selected, alert, onPress, testID }: { label:
       testID={testID}
     >
       <View style={styles.tileTop}>
-        <MaterialCommunityIcons name={icon} size={22} color={fg} />
-        <Text variant="small" bold style={{ color: fg, flexShrink: 1 }}>{label}</Text>
+        <MaterialCommunityIcons name={icon} size={24} color={fg} />
+        <Text variant="heading" style={{ color: fg }} testID={`${testID}-value`}>{String(value)}</Text>
       </View>
-      <Text variant="heading" style={{ color: fg }} testID={`${testID}-value`}>{String(value)}</Text>
+      <Text variant="small" bold style={{ color: fg }}>{label}</Text>
     </Pressable>
   );
 }
@@ -80,7 +80,7 @@ const styles = StyleSheet.create({
   tile: { flex: 1, minHeight: layout.minTouch, padding: space.sm, gap: 2, borderRadius: radius.md, borderWidth: 2, borderColor: colors.line, backgroundColor: colors.surface },
   tileAlert: { backgroundColor: colors.mandatory, borderColor: colors.mandatory },
   tileSelected: { borderColor: colors.ink, borderWidth: 3 },
-  tileTop: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
+  tileTop: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   sites: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   site: { flexDirection: 'row', alignItems: 'center', gap: space.xs, minHeight: layout.minTouch, paddingHorizontal: space.md, borderRadius: radius.pill, borderWidth: 2, borderColor: colors.ink, backgroundColor: colors.surface, maxWidth: '100%' },
   siteOn: { backgroundColor: colors.brand, borderColor: colors.brand },

@@ -25,7 +25,7 @@ interface Props {
 export function BoardTable({ rows, now, sort, onSort, paging, busy }: Props) {
   const router = useRouter();
   const columns: Column<BoardRow>[] = [
-    { key: 'site', title: 'Site', flex: 1, sortable: true, render: (r) => <Text variant="small" numberOfLines={2}>{r.siteName}</Text> },
+    { key: 'site', title: 'Site', flex: 0.9, sortable: true, render: (r) => <Text variant="small" numberOfLines={2}>{r.siteName}</Text> },
     { key: 'plant-room', title: 'Plant room', flex: 1, sortable: true, render: (r) => <Text variant="small" numberOfLines={2}>{r.plantRoomName ?? '—'}</Text> },
     {
       key: 'plant-id', title: 'Item', flex: 1.4, sortable: true,
@@ -45,19 +45,19 @@ export function BoardTable({ rows, now, sort, onSort, paging, busy }: Props) {
         </View>
       ),
     },
-    { key: 'reason', title: 'Reason', flex: 2, sortable: true, render: (r) => <Text variant="small" numberOfLines={3}>{r.reason}</Text> },
+    { key: 'reason', title: 'Reason', flex: 1.8, sortable: true, render: (r) => <Text variant="small" numberOfLines={3}>{r.reason}</Text> },
     { key: 'author', title: 'Holder', flex: 1.3, sortable: true, render: (r) => <HolderContact row={r} /> },
-    { key: 'raised', title: 'Raised', flex: 1.2, sortable: true, render: (r) => <Text variant="small">{formatInZone(r.raisedAt, r.timeZone, now)}</Text> },
+    { key: 'raised', title: 'Raised', flex: 1.2, sortable: true, render: (r) => <SiteTime iso={r.raisedAt} timeZone={r.timeZone} now={now} /> },
     {
       key: 'expires', title: 'Expires', flex: 1.4, sortable: true,
       render: (r) => (
         <View>
           <Text variant="small" bold>{expiryPhrase(r.expiresAt, now)}</Text>
-          <Text variant="small" muted>{formatInZone(r.expiresAt, r.timeZone, now)}</Text>
+          <SiteTime iso={r.expiresAt} timeZone={r.timeZone} now={now} muted />
         </View>
       ),
     },
-    { key: 'state', title: 'State', width: 150, sortable: true, render: (r) => <BoardStateMark state={r.state} testID={`board-state-${r.id}`} /> },
+    { key: 'state', title: 'State', width: 178, sortable: true, render: (r) => <BoardStateMark state={r.state} testID={`board-state-${r.id}`} /> },
   ];
   return (
     <DataTable
@@ -69,10 +69,22 @@ export function BoardTable({ rows, now, sort, onSort, paging, busy }: Props) {
       onSort={onSort}
       paging={paging}
       busy={busy}
-      minWidth={1000}
+      minWidth={1080}
       onRowPress={(r) => router.push(`/tags/${r.id}`)}
       empty={<EmptyState icon="tag-off-outline" title="No live tags match">Clear a filter or the search to see more.</EmptyState>}
       testID="board-table"
     />
+  );
+}
+
+/** A time as the site's clock reads it, the zone on its own line so narrow columns break cleanly. */
+function SiteTime({ iso, timeZone, now, muted }: { iso: string; timeZone: string; now: Date; muted?: boolean }) {
+  const text = formatInZone(iso, timeZone, now);
+  const cut = text.lastIndexOf(' (');
+  return (
+    <View>
+      <Text variant="small" muted={muted}>{cut > 0 ? text.slice(0, cut) : text}</Text>
+      {cut > 0 ? <Text variant="small" muted>{text.slice(cut + 1)}</Text> : null}
+    </View>
   );
 }

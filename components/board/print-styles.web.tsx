@@ -11,10 +11,9 @@ const CSS = `
   #root div { overflow: visible !important; }
   [role="navigation"], #board-actions, #board-filters, [data-testid="page-previous"], [data-testid="page-next"], [aria-label="Sort by"] { display: none !important; }
   #board-print-area { max-width: none !important; width: 100% !important; }
-  [role="table"] { width: 100% !important; min-width: 0 !important; }
+  [role="table"], #board-print-area [data-testid="board-table"] > div:first-child > div { width: 100% !important; min-width: 0 !important; }
   #board-print-area * { font-size: 9pt !important; line-height: 1.25 !important; }
   #board-print-area [role="row"] { min-height: 0 !important; break-inside: avoid; }
-  #board-print-area [role="button"] svg, #board-print-area [role="columnheader"] svg { display: none !important; }
 }
 `;
 

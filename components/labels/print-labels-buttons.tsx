@@ -4,14 +4,14 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { errorMessage } from '@/hooks/api/request';
 import { useLabelPdfMutation, type LabelLayout, type LabelPdfSelection } from '@/hooks/api/use-label-pdf';
-import { saveBlob } from '@/components/labels/save-blob';
+import { saveFile } from '@/components/ui/save-file';
 
 /** "Print labels" for one item, a plant room, a site or a table selection: downloads the PDF to print. */
 export function PrintLabelsButtons({ selection, fileStem, compact }: { selection: LabelPdfSelection; fileStem: string; compact?: boolean }) {
   const pdf = useLabelPdfMutation();
   const print = async (layout: LabelLayout) => {
     const blob = await pdf.mutateAsync({ selection, layout });
-    await saveBlob(blob, `${fileStem}-labels-${layout === 'sheet' ? 'a4' : 'roll-62mm'}.pdf`);
+    saveFile(blob, `${fileStem}-labels-${layout === 'sheet' ? 'a4' : 'roll-62mm'}.pdf`);
   };
   return (
     <View style={{ gap: space.sm }}>

@@ -10,7 +10,7 @@ import { Breadcrumbs } from '@/components/register/breadcrumbs';
 import { FilePicker, filePickerAvailable } from '@/components/register/file-picker';
 import { ImportPreview } from '@/components/register/import-preview';
 import { todayIso } from '@/components/register/register-vocabulary';
-import { saveFile } from '@/components/register/save-file';
+import { saveFile } from '@/components/ui/save-file';
 import { errorMessage } from '@/hooks/api/request';
 import { useExportAssetsMutation, useImportAssetsMutation } from '@/hooks/api/use-assets';
 import { usePermissions } from '@/hooks/auth/use-permissions';
