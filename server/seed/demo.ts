@@ -9,6 +9,7 @@ import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import type { PhotoStorage } from '@/server/lib/photo-storage';
 import { seedDemoRegister } from '@/server/seed/demo-register';
 import { seedDemoReadings } from '@/server/seed/demo-readings';
+import { seedDemoTags } from '@/server/seed/demo-tags';
 import type { Role } from '@/shared/rules/roles';
 
 export const DEMO_PASSWORD = 'isoledger-demo';
@@ -38,6 +39,7 @@ export async function seedDemo(sequelize: Sequelize, opts: { bcryptCost?: number
       if (!authors.supervisor || !authors.engineer || !authors.engineer2) return false;
       const seeded = await seedDemoRegister({ organisationId, authors, storage, transaction });
       await seedDemoReadings({ organisationId, authors, transaction });
+      if (seeded) await seedDemoTags({ organisationId, engineer: authors.engineer, engineer2: authors.engineer2, transaction });
       const viewer = users.find((u) => u.email === 'viewer@example.test');
       if (seeded && viewer) {
         // The demo viewer (a client's facilities manager, say) is given two of the three sites.

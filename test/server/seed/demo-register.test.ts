@@ -81,3 +81,18 @@ describe('demo register seed', () => {
     expect(await counts()).toEqual(before);
   });
 });
+
+describe('demo tags', () => {
+  it('seeds live tags once: an overdue group isolation and an override left for today', async () => {
+    const { Tag } = await import('@/server/models/tag.model');
+    const { TagEvent } = await import('@/server/models/tag-event.model');
+    const { isOverdue } = await import('@/shared/rules/tags');
+    const tags = await Tag.findAll();
+    expect(tags.map((t) => t.kind).sort()).toEqual(['isolation', 'isolation', 'override']);
+    expect(tags.every((t) => t.status === 'live')).toBe(true);
+    expect(tags.filter((t) => isOverdue(t, new Date())).length).toBe(2);
+    expect(await TagEvent.count({ where: { type: 'raised' } })).toBe(3);
+    expect(await seedDemo(db.sequelize, { storage })).toBe(false);
+    expect(await Tag.count()).toBe(3);
+  });
+});
