@@ -46,7 +46,7 @@ async function main() {
       try {
         const mail = await startLocalMailServer({ smtpPort: config.mail.port, webPort: config.mail.maildevWebPort });
         stops.push(mail.stop);
-        say(`fake mail server on 127.0.0.1:${mail.smtpPort}; read the mail at http://127.0.0.1:${mail.webPort}`);
+        say(`fake mail server on 127.0.0.1:${mail.smtpPort}; read the mail at http://127.0.0.1:${mail.webPort}/index.html`);
       } catch (err) {
         say(`could not start the fake mail server (${(err as Error).message}); carrying on without it, mail waits in the outbox`);
       }
