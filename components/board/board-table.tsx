@@ -47,7 +47,7 @@ export function BoardTable({ rows, now, sort, onSort, paging, busy }: Props) {
     },
     { key: 'reason', title: 'Reason', flex: 1.8, sortable: true, render: (r) => <Text variant="small" numberOfLines={3}>{r.reason}</Text> },
     { key: 'author', title: 'Holder', flex: 1.3, sortable: true, render: (r) => <HolderContact row={r} /> },
-    { key: 'raised', title: 'Raised', flex: 1.2, sortable: true, render: (r) => <SiteTime iso={r.raisedAt} timeZone={r.timeZone} now={now} /> },
+    { key: 'raised', title: 'Raised', flex: 1.3, sortable: true, render: (r) => <SiteTime iso={r.raisedAt} timeZone={r.timeZone} now={now} /> },
     {
       key: 'expires', title: 'Expires', flex: 1.4, sortable: true,
       render: (r) => (
@@ -84,7 +84,8 @@ function SiteTime({ iso, timeZone, now, muted }: { iso: string; timeZone: string
   return (
     <View>
       <Text variant="small" muted={muted}>{cut > 0 ? text.slice(0, cut) : text}</Text>
-      {cut > 0 ? <Text variant="small" muted>{text.slice(cut + 1)}</Text> : null}
+      {/* The zone on a line of its own, without brackets, so a narrow column never breaks it. */}
+      {cut > 0 ? <Text variant="small" muted numberOfLines={1}>{text.slice(cut + 2).replace(/\)$/, '')}</Text> : null}
     </View>
   );
 }
