@@ -2,12 +2,13 @@ import { Op, type Sequelize, type WhereOptions } from 'sequelize';
 import { clock } from '@/server/lib/clock';
 import { HttpError, forbidden, notFound } from '@/server/lib/http-error';
 import { renderLabelsPdf, type LabelLayout } from '@/server/lib/label-pdf';
+import { insertWithLabelCode } from '@/server/lib/unique-clash';
 import type { AuthUser } from '@/server/middleware/auth';
 import { Asset } from '@/server/models/asset.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { RetiredLabel } from '@/server/models/retired-label.model';
 import { Site } from '@/server/models/site.model';
-import { generateLabelCode, labelUrl, normaliseLabelCode } from '@/shared/rules/label-code';
+import { labelUrl, normaliseLabelCode } from '@/shared/rules/label-code';
 
 export const MAX_LABELS_PER_PDF = 500;
 
@@ -19,17 +20,10 @@ export async function assetIdForLabel(actor: AuthUser, raw: string): Promise<num
   return asset.id;
 }
 
-/** A fresh code that no item and no retired label has ever used. */
-export async function unusedLabelCode(): Promise<string> {
-  for (let i = 0; i < 10; i++) {
-    const code = generateLabelCode();
-    const taken = (await Asset.count({ where: { labelCode: code } })) + (await RetiredLabel.count({ where: { code } }));
-    if (!taken) return code;
-  }
-  throw new Error('could not find an unused label code');
-}
-
-/** Issues a new code for a damaged or lost label; the old code is retired (kept, never reissued) and stops opening the item. */
+/**
+ * Issues a new code for a damaged or lost label; the old code is retired (kept in retired_labels, whose unique index
+ * refuses it twice) and stops opening the item. A clash with a live code is retried by the register's own mechanism.
+ */
 export async function replaceLabel(sequelize: Sequelize, actor: AuthUser, assetId: number): Promise<{ labelCode: string; retiredCode: string }> {
   if (actor.role === 'viewer') throw forbidden('Viewers cannot replace labels.');
   return sequelize.transaction(async (transaction) => {
@@ -39,8 +33,10 @@ export async function replaceLabel(sequelize: Sequelize, actor: AuthUser, assetI
     if (!asset) throw notFound('Plant item');
     const retiredCode = asset.labelCode;
     await RetiredLabel.create({ organisationId: asset.organisationId, assetId: asset.id, code: retiredCode, retiredAt: clock.now(), retiredBy: actor.id }, { transaction });
-    const labelCode = await unusedLabelCode();
-    await asset.update({ labelCode }, { transaction });
+    const labelCode = await insertWithLabelCode(async (code) => {
+      await asset.update({ labelCode: code }, { transaction });
+      return code;
+    });
     return { labelCode, retiredCode };
   });
 }
