@@ -4,6 +4,7 @@ import { Organisation } from '@/server/models/organisation.model';
 import type { Visit } from '@/server/models/visit.model';
 import { enqueueMail, recipientsWanting, type OutboxMail } from '@/server/mail/outbox';
 import { formatInZone, renderBlocks, type Block, type RenderedMail } from '@/server/mail/render';
+import { ROLE_PERMISSIONS } from '@/shared/rules/permissions';
 import { TAG_EVENT_LABELS } from '@/shared/rules/tags';
 import { VISIT_DECISION_LABELS } from '@/shared/rules/visits';
 import type { Visit as VisitDto } from '@/shared/types/visits';
@@ -24,7 +25,7 @@ export interface VisitMailPayload {
 export async function enqueueVisitMail(visit: Visit, summary: VisitDto, actor: AuthUser, transaction: Transaction): Promise<void> {
   const sequelize = visit.sequelize;
   const mails: OutboxMail[] = [];
-  const people = await recipientsWanting(sequelize, visit.organisationId, 'digest', { roles: ['supervisor', 'admin'], transaction });
+  const people = await recipientsWanting(sequelize, visit.organisationId, 'digest', { roles: [...ROLE_PERMISSIONS.superviseVisits], transaction });
   for (const p of people) {
     if (p.id === actor.id) continue;
     mails.push({ organisationId: visit.organisationId, kind: 'visit-summary', toEmail: p.email, toUserId: p.id, payload: { visit: summary, recipientName: p.name, forClient: false } });

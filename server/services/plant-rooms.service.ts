@@ -11,7 +11,7 @@ import { liveTagCounts, liveTagsIn } from '@/server/services/live-tags.service';
 import { recordOpened } from '@/server/services/recent-places.service';
 import type { PlantRoomInput } from '@/shared/schemas/register';
 import type { PlantRoom as PlantRoomDto, SafetyLocations } from '@/shared/types/register';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 type Paging = { page: number; pageSize: number; offset: number };
 export type PlantRoomPatch = Partial<Omit<PlantRoomInput, 'siteId' | 'safety'>> & { safety?: Partial<SafetyLocations> };

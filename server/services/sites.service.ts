@@ -9,7 +9,7 @@ import { recordOpened } from '@/server/services/recent-places.service';
 import type { SiteInput } from '@/shared/schemas/register';
 import { isValidTimeZone } from '@/shared/rules/time-zone';
 import type { Site as SiteDto } from '@/shared/types/register';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 type Paging = { page: number; pageSize: number; offset: number };
 

@@ -14,15 +14,15 @@ import { findSite } from '@/server/services/register-access';
 import { liveTagsIn } from '@/server/services/live-tags.service';
 import { activityFor } from '@/server/services/visit-activity.service';
 import { carryOutDecisions, checkDecisions } from '@/server/services/visit-decisions';
-import { canEdit, isSupervisory } from '@/shared/rules/roles';
+import { may } from '@/shared/rules/permissions';
 import type { VisitDecisionAction } from '@/shared/rules/visits';
 import type { Tag as TagDto } from '@/shared/types/tags';
-import type { EndVisitInput, StartVisitInput } from '@/shared/schemas/visits';
+import type { EndVisitInput, StartVisitInput, VisitFiltersQuery } from '@/shared/schemas/visits';
 import type { ListResponse } from '@/shared/types/user';
 import type { Visit as VisitDto, VisitDecision as VisitDecisionDto } from '@/shared/types/visits';
 
 type Paging = { page: number; pageSize: number; offset: number };
-export interface VisitFilters { userId?: number; from?: Date; to?: Date; open?: 'true' | 'false' }
+export type VisitFilters = Pick<VisitFiltersQuery, 'userId' | 'from' | 'to' | 'open'>;
 
 const include = [{ model: Site, as: 'site' }, { model: User, as: 'user', attributes: ['id', 'name'] }];
 
@@ -44,12 +44,11 @@ function toVisitDto(v: Visit): VisitDto {
 async function findVisit(actor: AuthUser, id: number): Promise<Visit> {
   const visit = await Visit.findOne({ where: { id, organisationId: actor.organisationId }, include });
   if (!visit) throw notFound('Visit');
-  if (visit.userId !== actor.id && !isSupervisory(actor.role)) throw forbidden('Only the person who made this visit and supervisors can open it.');
+  if (visit.userId !== actor.id && !may(actor, 'superviseVisits')) throw forbidden('Only the person who made this visit and supervisors can open it.');
   return visit;
 }
 
 export async function startVisit(actor: AuthUser, siteId: number, input: StartVisitInput): Promise<VisitDto> {
-  if (!canEdit(actor.role)) throw forbidden('Viewers cannot record visits.');
   const site = await findSite(actor, siteId);
   const open = await Visit.findOne({ where: { userId: actor.id, endedAt: null }, include });
   if (open) throw new HttpError(409, 'visit-in-progress', `You already have a visit in progress at ${open.site?.name ?? 'another site'}. End it before starting another.`);
@@ -113,10 +112,9 @@ export async function endVisit(sequelize: Sequelize, actor: AuthUser, id: number
 
 /** A site's visits: supervisors see everyone's and may filter; an engineer sees their own. */
 export async function listSiteVisits(actor: AuthUser, siteId: number, filters: VisitFilters, paging: Paging): Promise<ListResponse<VisitDto>> {
-  if (!canEdit(actor.role)) throw forbidden('Viewers cannot see visit records.');
   await findSite(actor, siteId);
   const where: WhereOptions<Visit> = { organisationId: actor.organisationId, siteId };
-  const userId = isSupervisory(actor.role) ? filters.userId : actor.id;
+  const userId = may(actor, 'superviseVisits') ? filters.userId : actor.id;
   if (userId) Object.assign(where, { userId });
   if (filters.from || filters.to) Object.assign(where, { startedAt: { ...(filters.from ? { [Op.gte]: filters.from } : {}), ...(filters.to ? { [Op.lte]: filters.to } : {}) } });
   if (filters.open) Object.assign(where, { endedAt: filters.open === 'true' ? null : { [Op.ne]: null } });

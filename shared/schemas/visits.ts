@@ -1,4 +1,5 @@
 import * as yup from 'yup';
+import { idField, oneOfField, pagingQuery } from '@/shared/schemas/request';
 import { RELEASE_CHECKS } from '@/shared/rules/tags';
 import { VISIT_DECISION_ACTIONS } from '@/shared/rules/visits';
 
@@ -25,9 +26,11 @@ export const endVisitSchema = yup.object({
 });
 export type EndVisitInput = yup.InferType<typeof endVisitSchema>;
 
-export const visitFiltersSchema = yup.object({
-  userId: yup.number().integer().positive(),
-  from: yup.date().typeError('Give a valid date.'),
-  to: yup.date().typeError('Give a valid date.'),
-  open: yup.string().oneOf(['true', 'false'] as const),
+/** `?userId=&from=&to=&open=` on a site's visits, with the paging of every list. */
+export const visitFiltersQuery = pagingQuery.shape({
+  userId: idField('userId'),
+  from: yup.date().typeError('from must be a date, e.g. 2026-03-01.'),
+  to: yup.date().typeError('to must be a date, e.g. 2026-03-31.'),
+  open: oneOfField('open', ['true', 'false'] as const),
 });
+export type VisitFiltersQuery = yup.InferType<typeof visitFiltersQuery>;
