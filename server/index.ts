@@ -1,12 +1,13 @@
 import type { Server } from 'node:http';
 import { createApp } from '@/server/app';
-import type { ServerConfig } from '@/server/config';
+import { assertStartable, type ServerConfig } from '@/server/config';
 import { createSequelize, migrate } from '@/server/db';
 import { logger } from '@/server/lib/logger';
 import { startMailJobs } from '@/server/mail/mail-jobs';
 
 /** Connects, migrates and listens on 127.0.0.1 (or HOST). Returns a function that closes everything. */
 export async function startServer(config: ServerConfig, databaseUrl: string): Promise<{ server: Server; close: () => Promise<void> }> {
+  assertStartable(config);
   const sequelize = createSequelize(databaseUrl);
   await sequelize.authenticate();
   await migrate(sequelize);
