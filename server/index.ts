@@ -2,6 +2,7 @@ import type { Server } from 'node:http';
 import { createApp } from '@/server/app';
 import { assertStartable, type ServerConfig } from '@/server/config';
 import { createSequelize, migrate } from '@/server/db';
+import { backgroundSettled } from '@/server/lib/background';
 import { logger } from '@/server/lib/logger';
 import { startMailJobs } from '@/server/mail/mail-jobs';
 
@@ -25,6 +26,7 @@ export async function startServer(config: ServerConfig, databaseUrl: string): Pr
     close: async () => {
       await new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections?.();
+      await backgroundSettled();
       await stopMailJobs();
       await sequelize.close();
     },

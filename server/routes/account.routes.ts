@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import type { AppContext } from '@/server/app';
-import { logger } from '@/server/lib/logger';
+import { afterResponse } from '@/server/lib/background';
 import { accountAndAddressLimits, addressKey, attemptLimiter } from '@/server/middleware/attempt-limits';
 import { auth, currentUser } from '@/server/middleware/auth';
 import { validate } from '@/server/middleware/validate';
@@ -22,7 +22,7 @@ export function accountRoutes({ sequelize, config }: AppContext) {
   router.post('/auth/password/reset-request', ...resetLimits, validate(resetRequestSchema), (req, res) => {
     // Answered before any work is done, so a known address and an unknown one take the same time.
     res.status(202).json(RESET_REQUEST_ANSWER);
-    requestPasswordReset(sequelize, req.body, req.ip ?? null).catch((err) => logger.error({ err }, 'password reset request failed'));
+    afterResponse('password reset request', () => requestPasswordReset(sequelize, req.body, req.ip ?? null));
   });
   router.post('/auth/password/set', setLimit, validate(setPasswordSchema), async (req, res) => {
     res.json(await setPasswordWithToken(sequelize, config, req.body, req.ip ?? null));
