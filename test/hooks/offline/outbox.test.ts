@@ -67,7 +67,7 @@ describe('Outbox', () => {
 
   it('keeps an expired session, a timeout, too many requests and a server fault waiting', async () => {
     for (const status of [401, 408, 429, 500, 503]) {
-      const err = new RequestError(status, 'x', 'later');
+      const err = new RequestError(status, 'server-error', 'later');
       expect(isRefusal(err)).toBe(false);
       const box = new Outbox(createOutboxStore(freshDb()));
       await box.add(entry('a'));
@@ -80,7 +80,7 @@ describe('Outbox', () => {
     const box = new Outbox(createOutboxStore(freshDb()));
     await box.add(entry('clear-1', { kind: 'tag-clear', summary: 'clear the tag (tag 1)' }));
     await box.add(entry('note-2'));
-    const refusal = new RequestError(409, 'tag-not-live', 'This tag was already cleared by Ama at 10:42.');
+    const refusal = new RequestError(409, 'already-cleared', 'This tag was already cleared by Ama at 10:42.');
     const { calls, send } = server({ 'clear-1': [refusal] });
     const result = await box.flush(OWNER, send);
     expect(result).toEqual({ sent: 1, refused: 1, waiting: 0 });
@@ -88,7 +88,7 @@ describe('Outbox', () => {
     const [kept] = box.snapshot();
     expect(kept.key).toBe('clear-1');
     expect(kept.state).toBe('refused');
-    expect(kept.refusal).toEqual({ status: 409, code: 'tag-not-live', message: 'This tag was already cleared by Ama at 10:42.' });
+    expect(kept.refusal).toEqual({ status: 409, code: 'already-cleared', message: 'This tag was already cleared by Ama at 10:42.' });
     // A refused entry is not sent again on its own; only when the person asks.
     await box.flush(OWNER, send);
     expect(calls).toHaveLength(2);
@@ -104,12 +104,12 @@ describe('Outbox', () => {
     await before.add(entry('a'));
     await before.add(entry('b'));
     await before.add(entry('c'));
-    await before.flush(OWNER, server({ a: [new RequestError(422, 'validation', 'The tag is archived.')], b: [offline()] }).send);
+    await before.flush(OWNER, server({ a: [new RequestError(409, 'archived', 'The item is archived.')], b: [offline()] }).send);
 
     const after = new Outbox(createOutboxStore(db));
     await after.load();
     expect(after.snapshot().map((e) => [e.key, e.state])).toEqual([['a', 'refused'], ['b', 'waiting'], ['c', 'waiting']]);
-    expect(after.snapshot()[0].refusal?.message).toBe('The tag is archived.');
+    expect(after.snapshot()[0].refusal?.message).toBe('The item is archived.');
     const { calls, send } = server();
     await after.flush(OWNER, send);
     expect(calls.map((c) => c.key)).toEqual(['b', 'c']);
