@@ -6,9 +6,11 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
+import { useSiteQuery } from '@/hooks/api/use-sites';
 import { flushOutbox, outbox } from '@/hooks/offline/send-or-queue';
 import { useOutboxEntries } from '@/hooks/offline/use-outbox';
 import type { OutboxEntry } from '@/hooks/offline/outbox-types';
+import type { Asset } from '@/shared/types/register';
 
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'short' });
 
@@ -51,6 +53,15 @@ export function PendingForRecord({ assetId, tagId }: { assetId?: number; tagId?:
       <Link href="/pending" style={styles.link}><Text bold style={{ color: colors.brand }}>All pending actions</Text></Link>
     </Card>
   );
+}
+
+/**
+ * On an item's record: its actions still on this device, and its site fetched alongside, so raising a tag
+ * (which needs the site's time zone) works later with no signal.
+ */
+export function ItemOffline({ asset }: { asset: Pick<Asset, 'id' | 'siteId'> }) {
+  useSiteQuery(asset.siteId);
+  return <PendingForRecord assetId={asset.id} />;
 }
 
 /** A strip at the top of every signed-in screen while anything waits or was refused. */
