@@ -1,11 +1,12 @@
 import path from 'node:path';
 import { readConfig } from '@/server/config';
-import { createSequelize, migrate } from '@/server/db';
+import { createSequelize, prepareDatabase } from '@/server/db';
 import { startServer } from '@/server/index';
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '@/server/seed/demo';
 import { readOrCreateSecret, startLocalDatabase } from '@/scripts/lib/local-db';
 import { buildWebIfChanged } from '@/scripts/lib/web-build';
 import { startLocalMailServer } from '@/scripts/lib/maildev';
+import type { LauncherStatus } from '@/server/services/health.service';
 
 const say = (line: string) => console.log(`[isoledger] ${line}`);
 
@@ -25,16 +26,21 @@ async function main() {
   process.on('SIGTERM', () => void shutdown(0));
 
   try {
+    // DATABASE_URL is the server's own account; DATABASE_OWNER_URL the account migrations run as (scripts/sql/accounts.sql).
     let databaseUrl = process.env.DATABASE_URL;
+    let ownerUrl = process.env.DATABASE_OWNER_URL || databaseUrl;
+    let launcher: (() => LauncherStatus) | undefined;
     if (!databaseUrl) {
       const port = Number(process.env.DB_PORT ?? 3307);
       say(`starting the private MariaDB on 127.0.0.1:${port} (data in ${path.join(config.dataDir, 'mariadb')})`);
       const local = await startLocalDatabase(config.dataDir, port, say);
       stops.push(() => local.db.stop());
-      databaseUrl = local.databaseUrl;
+      databaseUrl = local.serverUrl;
+      ownerUrl = local.ownerUrl;
+      launcher = local.db.status;
     }
+    await prepareDatabase(ownerUrl!, databaseUrl);
     const sequelize = createSequelize(databaseUrl);
-    await migrate(sequelize);
     if (process.env.DEMO !== '0') {
       say((await seedDemo(sequelize)) ? 'demo organisation seeded' : 'demo organisation already present');
     }
@@ -51,7 +57,7 @@ async function main() {
         say(`could not start the fake mail server (${(err as Error).message}); carrying on without it, mail waits in the outbox`);
       }
     }
-    const running = await startServer(config, databaseUrl);
+    const running = await startServer(config, databaseUrl, { launcher });
     stops.push(running.close);
 
     say(`Isoledger is running at ${config.publicUrl}`);

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ValidationError } from 'yup';
 import { HttpError } from '@/server/lib/http-error';
+import { isDatabaseUnavailable } from '@/server/db-errors';
 import { logger } from '@/server/lib/logger';
 
 /** Turns a yup ValidationError into `{ path: message }`, first message per field. */
@@ -33,6 +34,11 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (status >= 400 && status < 500) {
     const message = err.type === 'entity.too.large' ? 'The request is too large.' : err.type === 'entity.parse.failed' ? 'The request body is not valid JSON.' : 'The request could not be understood.';
     res.status(status).json({ error: { code: err.type ?? 'bad-request', message } });
+    return;
+  }
+  if (isDatabaseUnavailable(err)) {
+    logger.warn({ err: { message: err.message, name: err.name }, method: req.method, url: req.originalUrl }, 'database unavailable');
+    res.set('Retry-After', '5').status(503).json({ error: { code: 'database-unavailable', message: 'The database is not answering just now. Please try again in a few seconds.' } });
     return;
   }
   logger.error({ err, method: req.method, url: req.originalUrl }, 'unhandled error');
