@@ -6,7 +6,8 @@ import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
 import type { ServerConfig } from '@/server/config';
-import { logger } from '@/server/lib/logger';
+import { logger, redactUrl } from '@/server/lib/logger';
+import type { Logger } from 'pino';
 import { errorHandler, notFoundApi } from '@/server/middleware/error-handler';
 import { authRoutes } from '@/server/routes/auth.routes';
 import { calcRoutes } from '@/server/routes/calc.routes';
@@ -35,6 +36,8 @@ export interface AppContext {
   storage?: PhotoStorage;
   /** The state of the private mariadbd when this process launched it, for /api/health. */
   launcher?: () => LauncherStatus;
+  /** Where request lines go; by default the server's logger (none under NODE_ENV=test). */
+  requestLog?: Logger;
 }
 
 /** Builds the Express app; never listens (server/index.ts does). */
@@ -67,12 +70,13 @@ export function createApp(ctx: AppContext) {
       strictTransportSecurity: false,
     }),
   );
-  if (process.env.NODE_ENV !== 'test') app.use(
+  const log = ctx.requestLog ?? (process.env.NODE_ENV === 'test' ? null : logger);
+  if (log) app.use(
       pinoHttp({
-        logger,
+        logger: log,
         autoLogging: { ignore: (req) => req.url === '/api/health' },
-        // One short line per request: no headers, so no tokens in the log.
-        serializers: { req: (req) => ({ method: req.method, url: req.url }), res: (res) => ({ statusCode: res.statusCode }) },
+        // One short line per request: no headers, and one-time tokens cut out of the URL.
+        serializers: { req: (req) => ({ method: req.method, url: redactUrl(req.url) }), res: (res) => ({ statusCode: res.statusCode }) },
       }),
     );
 

@@ -1,7 +1,8 @@
 import type { Server } from 'node:http';
 import { createApp } from '@/server/app';
-import type { ServerConfig } from '@/server/config';
+import { assertStartable, type ServerConfig } from '@/server/config';
 import { assertMigrated, createSequelize, prepareDatabase } from '@/server/db';
+import { backgroundSettled } from '@/server/lib/background';
 import { logger } from '@/server/lib/logger';
 import { startMailJobs } from '@/server/mail/mail-jobs';
 import type { LauncherStatus } from '@/server/services/health.service';
@@ -15,6 +16,7 @@ export interface StartOptions {
 
 /** Connects as the server's own account, checks (or runs) migrations and listens on 127.0.0.1 (or HOST). */
 export async function startServer(config: ServerConfig, databaseUrl: string, opts: StartOptions = {}): Promise<{ server: Server; close: () => Promise<void> }> {
+  assertStartable(config);
   if (opts.ownerUrl) await prepareDatabase(opts.ownerUrl, databaseUrl);
   const sequelize = createSequelize(databaseUrl);
   await sequelize.authenticate();
@@ -33,6 +35,7 @@ export async function startServer(config: ServerConfig, databaseUrl: string, opt
     close: async () => {
       await new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections?.();
+      await backgroundSettled();
       await stopMailJobs();
       await sequelize.close();
     },

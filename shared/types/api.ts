@@ -23,7 +23,7 @@ export type ErrorCode =
   // 413, 415, 422: what was sent cannot be used
   | 'file-too-large' | 'entity.too.large' | 'too-many-labels' | 'unsupported-image' | 'invalid' | 'image-too-large' | 'unreadable-image'
   // 429, 5xx
-  | 'rate-limited' | 'server-error' | 'unavailable'
+  | 'rate-limited' | 'server-error' | 'unavailable' | 'busy'
   // made up by the client when there is no answer to read
   | 'offline' | 'http-error' | 'bad-url';
 
