@@ -27,6 +27,8 @@ import { sitesRoutes } from '@/server/routes/sites.routes';
 import { boardRoutes } from '@/server/routes/board.routes';
 import { teamRoutes } from '@/server/routes/team.routes';
 import { accountRoutes } from '@/server/routes/account.routes';
+import { meRoutes } from '@/server/routes/me.routes';
+import { visitsRoutes } from '@/server/routes/visits.routes';
 import { webStatic } from '@/server/lib/web-static';
 
 export interface AppContext {
@@ -100,6 +102,8 @@ export function createApp(ctx: AppContext) {
   api.use(boardRoutes(ctx));
   api.use(teamRoutes(ctx));
   api.use(accountRoutes(ctx));
+  api.use(visitsRoutes(ctx));
+  api.use(meRoutes(ctx));
   api.use(notFoundApi);
   app.use('/api', api);
 
