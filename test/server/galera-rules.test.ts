@@ -49,8 +49,10 @@ describe('the schema and code follow Galera’s rules', () => {
     const banned = /\b(LOCK\s+TABLES?|GET_LOCK|RELEASE_LOCK|IS_FREE_LOCK|WITH\s+READ\s+LOCK)\b/i;
     const files = ['server', 'scripts', 'shared'].flatMap((dir) => sourceFiles(path.resolve(dir)));
     expect(files.length).toBeGreaterThan(50);
+    // Comments may name them (to say they are not used); code may not.
+    const comment = /^\s*(\/\/|\/\*|\*|--)/;
     const hits = files.flatMap((file) =>
-      fs.readFileSync(file, 'utf8').split('\n').flatMap((line, i) => (banned.test(line) && !line.trim().startsWith('//') && !line.trim().startsWith('*') && !line.trim().startsWith('--') ? [`${path.relative(process.cwd(), file)}:${i + 1}: ${line.trim()}`] : [])),
+      fs.readFileSync(file, 'utf8').split('\n').flatMap((line, i) => (banned.test(line) && !comment.test(line) ? [`${path.relative(process.cwd(), file)}:${i + 1}: ${line.trim()}`] : [])),
     );
     expect(hits).toEqual([]);
   });
