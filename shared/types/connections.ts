@@ -1,6 +1,7 @@
 import type { IsolatingKind, Medium } from '@/shared/rules/connections';
 import type { AssetType, EnergySource } from '@/shared/rules/register';
 import type { AssetState } from '@/shared/rules/tags';
+import type { ImportRowError } from '@/shared/types/register';
 import type { IsolationMethod } from '@/shared/rules/tags';
 
 /** A plant item as a connection or a plan names it. */
@@ -75,4 +76,13 @@ export interface ClosingAffects {
 export interface PlantRoomDiagram {
   items: (ItemRef & { state: AssetState; overdue: boolean; inRoom: boolean })[];
   connections: { id: number; fromId: number; toId: number; medium: Medium }[];
+}
+
+export interface ConnectionImportResult {
+  dryRun: boolean;
+  rows: number;
+  created: number;
+  /** Rows naming a link that is already recorded (an exported file imported back gives only these). */
+  unchanged: number;
+  errors: ImportRowError[];
 }

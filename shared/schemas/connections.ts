@@ -1,0 +1,12 @@
+import * as yup from 'yup';
+import { MEDIA } from '@/shared/rules/connections';
+
+const itemId = (what: string) => yup.number().typeError(`Choose the item ${what}.`).integer().positive().required(`Choose the item ${what}.`);
+
+/** A new link: `from` supplies `to` with `medium`. */
+export const connectionSchema = yup.object({
+  fromAssetId: itemId('that supplies'),
+  toAssetId: itemId('that is supplied'),
+  medium: yup.string().oneOf([...MEDIA], `Unknown medium: use one of ${MEDIA.join(', ')}.`).required('Choose the medium.'),
+});
+export type ConnectionInput = yup.InferType<typeof connectionSchema>;
