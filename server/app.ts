@@ -1,3 +1,4 @@
+import compression from 'compression';
 import express from 'express';
 import fs from 'node:fs';
 import path from 'node:path';
@@ -25,6 +26,7 @@ import { boardRoutes } from '@/server/routes/board.routes';
 import { teamRoutes } from '@/server/routes/team.routes';
 import { accountRoutes } from '@/server/routes/account.routes';
 import { connectionsRoutes } from '@/server/routes/connections.routes';
+import { webStatic } from '@/server/lib/web-static';
 
 export interface AppContext {
   sequelize: Sequelize;
@@ -72,6 +74,9 @@ export function createApp(ctx: AppContext) {
       }),
     );
 
+  // gzip or brotli for JSON, CSV and the app shell when the browser asks; built files come precompressed (web-static).
+  app.use(compression());
+
   const api = express.Router();
   api.use(express.json({ limit: '256kb' }));
   api.use(healthRoutes(ctx));
@@ -94,13 +99,7 @@ export function createApp(ctx: AppContext) {
   app.use('/api', api);
 
   const webDir = ctx.config.webDir;
-  if (webDir && fs.existsSync(path.join(webDir, 'index.html'))) {
-    app.use(express.static(webDir, { index: false, maxAge: '1h' }));
-    // Client-side routes (e.g. /sites/3, /l/CODE) load the app shell on a hard refresh.
-    app.get(/^(?!\/api\/).*/, (_req, res) => {
-      res.set('Cache-Control', 'no-cache').sendFile(path.join(webDir, 'index.html'));
-    });
-  }
+  if (webDir && fs.existsSync(path.join(webDir, 'index.html'))) app.use(webStatic(webDir));
   app.use(errorHandler);
   return app;
 }

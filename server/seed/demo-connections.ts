@@ -42,8 +42,8 @@ const BOILER_HOUSE_ITEMS: NewItem[] = [
   wetValve('BV-C1', 'Heating circuit 1 bypass valve', 'normally-closed'),
   wetValve('IV-C1R', 'Heating circuit 1 return isolating valve'),
   ['PW-C1', 'pipework', 'Heating circuit 1 pipework (main block radiators)', 'LTHW heating circuit 1', ['hot-water', 'stored-pressure'], {}],
-  ['WS-01', 'water-supply', 'Incoming mains water', 'Cold water', ['stored-pressure'], { meterPoint: 'Demo water meter 0001' }],
-  ['SV-01', 'valve', 'Pressurisation unit feed stop valve', 'Cold water', ['stored-pressure'], manual],
+  ['WS-01', 'water-supply', 'Incoming mains water', 'Cold water', ['mains-make-up'], { meterPoint: 'Demo water meter 0001' }],
+  ['SV-01', 'valve', 'Pressurisation unit feed stop valve', 'Cold water', ['mains-make-up'], manual],
 ];
 
 const boilers = ['B01', 'B02', 'B03'];

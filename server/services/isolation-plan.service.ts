@@ -1,6 +1,6 @@
 import { closingAffects, gapMessage, methodFor, planIsolation } from '@/server/lib/isolation/isolation-planner';
 import { isStandIn, key, type GraphItem, type GraphLink } from '@/server/lib/isolation/plant-graph';
-import { unprocessable } from '@/server/lib/http-error';
+import { HttpError } from '@/server/lib/http-error';
 import type { AuthUser } from '@/server/middleware/auth';
 import type { Asset } from '@/server/models/asset.model';
 import type { Connection } from '@/server/models/connection.model';
@@ -35,7 +35,8 @@ export function readPlanSources(raw: unknown, fallback: EnergySource[]): EnergyS
   const list = String(raw).split(',').map((s) => s.trim()).filter(Boolean);
   const unknown = list.filter((s) => !(ENERGY_SOURCES as readonly string[]).includes(s));
   if (unknown.length || !list.length) {
-    throw unprocessable(`Unknown energy source ${unknown.join(', ') || '(none)'}: use ${ENERGY_SOURCES.join(', ')}.`, { sources: `Use ${ENERGY_SOURCES.join(', ')}.` });
+    // A bad query is the request's fault (400), as for every other query string.
+    throw new HttpError(400, 'bad-query', `Unknown energy source ${unknown.join(', ') || '(none)'}: use ${ENERGY_SOURCES.join(', ')}.`, { sources: `Use ${ENERGY_SOURCES.join(', ')}.` });
   }
   return [...new Set(list)] as EnergySource[];
 }

@@ -9,7 +9,7 @@ import { assertCanEdit, findPlantRoom, findSite, siteForField } from '@/server/s
 import { toPlantRoomDto } from '@/server/services/register-dto';
 import type { PlantRoomInput } from '@/shared/schemas/register';
 import type { PlantRoom as PlantRoomDto, SafetyLocations } from '@/shared/types/register';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 type Paging = { page: number; pageSize: number; offset: number };
 export type PlantRoomPatch = Partial<Omit<PlantRoomInput, 'siteId' | 'safety'>> & { safety?: Partial<SafetyLocations> };

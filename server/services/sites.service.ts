@@ -7,7 +7,7 @@ import { findSite } from '@/server/services/register-access';
 import type { SiteInput } from '@/shared/schemas/register';
 import { isValidTimeZone } from '@/shared/rules/time-zone';
 import type { Site as SiteDto } from '@/shared/types/register';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 type Paging = { page: number; pageSize: number; offset: number };
 

@@ -27,15 +27,15 @@ export const MEDIUM_LABELS: Record<Medium, string> = {
 /** The energy source a tag isolates when this medium is cut. */
 export const MEDIUM_SOURCE: Record<Medium, EnergySource> = {
   gas: 'gas',
-  oil: 'chemical',
+  oil: 'oil',
   electrical: 'electrical',
   'heating-flow': 'hot-water',
   'heating-return': 'hot-water',
   'hot-water': 'hot-water',
   'cold-water': 'stored-pressure',
-  'mains-water': 'stored-pressure',
-  refrigerant: 'stored-pressure',
-  'compressed-air': 'stored-pressure',
+  'mains-water': 'mains-make-up',
+  refrigerant: 'refrigerant',
+  'compressed-air': 'pneumatic',
 };
 
 /**

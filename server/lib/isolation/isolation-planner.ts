@@ -36,7 +36,9 @@ function holdsStoredEnergy(item: GraphItem, source: EnergySource): boolean {
   if (source === 'hot-water' || source === 'stored-pressure') {
     return STORED_ENERGY_TYPES.has(item.type) || item.energySources.includes('stored-pressure') || (source === 'hot-water' && item.energySources.includes('hot-water'));
   }
-  // Gas or oil left in a section of pipe must be purged or drained.
+  // Drive capacitors hold charge after the supply is off (OSHA 29 CFR 1910.147(d)(5)).
+  if (source === 'electrical') return item.energySources.includes('stored-charge');
+  // Gas, oil, refrigerant or air left in a section of pipe must be purged, drained or recovered.
   return item.type === 'pipework';
 }
 

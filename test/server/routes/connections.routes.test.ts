@@ -160,9 +160,9 @@ describe('GET /api/assets/:id/isolation-plan', () => {
     expect(res.body.affects).toEqual([]);
   });
 
-  it('refuses an unknown energy source (422)', async () => {
+  it('refuses an unknown energy source (400, a bad query)', async () => {
     const res = await c.engineer.get(`/api/assets/${id['B-01']}/isolation-plan?sources=gas,steam`);
-    expect(res.status).toBe(422);
+    expect(res.status).toBe(400);
     expect(res.body.error.message).toMatch(/Unknown energy source steam/);
   });
 });
