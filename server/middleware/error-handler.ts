@@ -1,7 +1,8 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ValidationError } from 'yup';
 import { HttpError } from '@/server/lib/http-error';
-import { logger } from '@/server/lib/logger';
+import { logger, redactUrl } from '@/server/lib/logger';
+import { BusyError } from '@/server/lib/work-limit';
 import { fieldErrors } from '@/shared/schemas/field-errors';
 import type { ApiErrorBody, ErrorCode } from '@/shared/types/api';
 
@@ -16,6 +17,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     return;
   }
   if (err instanceof HttpError) {
+    if (err instanceof BusyError) res.set('Retry-After', String(err.retryAfterSeconds));
     res.status(err.status).json({ error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } });
     return;
   }
@@ -27,6 +29,6 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     res.status(status).json({ error: { code, message } } satisfies ApiErrorBody);
     return;
   }
-  logger.error({ err, method: req.method, url: req.originalUrl }, 'unhandled error');
+  logger.error({ err, method: req.method, url: redactUrl(req.originalUrl) }, 'unhandled error');
   res.status(500).json({ error: { code: 'server-error', message: 'Something went wrong on the server. It has been logged; please try again.' } });
 };
