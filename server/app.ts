@@ -27,6 +27,7 @@ import { sitesRoutes } from '@/server/routes/sites.routes';
 import { boardRoutes } from '@/server/routes/board.routes';
 import { teamRoutes } from '@/server/routes/team.routes';
 import { accountRoutes } from '@/server/routes/account.routes';
+import { connectionsRoutes } from '@/server/routes/connections.routes';
 import { meRoutes } from '@/server/routes/me.routes';
 import { visitsRoutes } from '@/server/routes/visits.routes';
 import { webStatic } from '@/server/lib/web-static';
@@ -93,6 +94,7 @@ export function createApp(ctx: AppContext) {
   api.use(sitesRoutes(ctx));
   api.use(plantRoomsRoutes(ctx));
   api.use(assetsRoutes(ctx));
+  api.use(connectionsRoutes(ctx));
   api.use(photosRoutes(ctx));
   api.use(calcRoutes(ctx));
   api.use(readingsRoutes(ctx));

@@ -9,6 +9,7 @@ import { AuditEvent } from '@/server/models/audit-event.model';
 import { Site } from '@/server/models/site.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { Asset } from '@/server/models/asset.model';
+import { Connection } from '@/server/models/connection.model';
 import { HeatingSystem } from '@/server/models/heating-system.model';
 import { Reading } from '@/server/models/reading.model';
 import { Photo } from '@/server/models/photo.model';
@@ -116,6 +117,11 @@ function initModels(sequelize: Sequelize) {
   Tag.belongsTo(User, { foreignKey: 'clearedById', as: 'clearedBy' });
   Tag.hasMany(TagEvent, { foreignKey: 'tagId', as: 'events' });
   TagEvent.belongsTo(User, { foreignKey: 'byId', as: 'by' });
+
+  Connection.initModel(sequelize);
+  Connection.belongsTo(Asset, { foreignKey: 'fromAssetId', as: 'fromAsset' });
+  Connection.belongsTo(Asset, { foreignKey: 'toAssetId', as: 'toAsset' });
+  Connection.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
 
   UserSiteAccess.initModel(sequelize);
   NotificationSetting.initModel(sequelize);
