@@ -12,7 +12,7 @@ import path from 'node:path';
 import QRCode from 'qrcode';
 import { createApp } from '@/server/app';
 import { readConfig } from '@/server/config';
-import { createSequelize, migrate } from '@/server/db';
+import { createSequelize, prepareDatabase } from '@/server/db';
 import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import { Asset } from '@/server/models/asset.model';
 import { User } from '@/server/models/user.model';
@@ -21,7 +21,8 @@ import { labelUrl } from '@/shared/rules/label-code';
 import { captureBoardSql, getter, rawBoard, timeIt } from '@/scripts/lib/bench-db';
 import { buildBlankApp, launchChromium, scriptsBeforeFirstRender, serveDist, type ScriptBytes } from '@/scripts/lib/bench-js';
 import { seedBenchTags } from '@/scripts/lib/bench-tags';
-import { asRoot, freePort, startPrivateMariaDb } from '@/scripts/lib/mariadb';
+import { localAccounts, provisionDatabase } from '@/scripts/lib/local-db';
+import { freePort, startPrivateMariaDb } from '@/scripts/lib/mariadb';
 import { writeY4mFromPng } from '@/test/e2e/support/y4m';
 
 const LIVE = Number(process.env.BENCH_LIVE ?? 5000);
@@ -37,17 +38,17 @@ async function main() {
   if (!fs.existsSync(path.join(DIST, 'index.html'))) throw new Error('dist/index.html is missing: npm run build:web first');
   const tmp = fs.mkdtempSync(path.join(os.tmpdir(), 'isoledger-bench-'));
   const db = await startPrivateMariaDb({ dataDir: path.join(tmp, 'db'), port: await freePort() });
-  await asRoot(db.port, ['CREATE DATABASE bench CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci']);
-  const sequelize = createSequelize(`mariadb://root@127.0.0.1:${db.port}/bench`);
+  // The server's own restricted account, as npm start uses it; the raw queries go through the same account.
+  const { ownerUrl, serverUrl } = await provisionDatabase(db, { ...localAccounts(tmp), database: 'bench' });
+  await prepareDatabase(ownerUrl, serverUrl);
+  const sequelize = createSequelize(serverUrl);
   const closers: (() => Promise<unknown>)[] = [];
   try {
-    await migrate(sequelize);
     const config = readConfig({ DATA_DIR: tmp }, { jwtSecret: 'bench-secret-not-for-production-use-only', webDir: DIST, bcryptCost: 10, loginRateLimit: { max: 1000, windowMs: 60_000 } });
     await seedDemo(sequelize, { storage: createPhotoStorage(config) });
     const supervisor = (await User.findOne({ where: { email: 'supervisor@example.test' } }))!;
     say(`seeding ${LIVE} live and ${CLEARED} cleared tags…`);
     await seedBenchTags(supervisor.organisationId, LIVE, CLEARED);
-    await sequelize.query('ANALYZE TABLE tags');
 
     const server = createApp({ sequelize, config }).listen(0, '127.0.0.1');
     await new Promise((r) => server.once('listening', r));
@@ -61,7 +62,7 @@ async function main() {
     const actor = { id: supervisor.id, organisationId: supervisor.organisationId, role: supervisor.role, name: supervisor.name, email: supervisor.email };
     const statements = await captureBoardSql(sequelize, actor);
     const board = await timeIt(REQUESTS, () => get('/board'));
-    const raw = await rawBoard({ port: db.port, database: 'bench' }, statements, REQUESTS);
+    const raw = await rawBoard(serverUrl, statements, REQUESTS);
     say(`board, ${LIVE} live + ${CLEARED} cleared tags (GET /api/board, default view)   p50 ${ms(board.p50)}   p95 ${ms(board.p95)}`);
     say(`board, the same ${statements.length} statements raw through the mariadb driver     p50 ${ms(raw.p50)}   p95 ${ms(raw.p95)}`);
     const ratio = board.p95 / raw.p95;

@@ -44,8 +44,12 @@ export async function captureBoardSql(sequelize: Sequelize, actor: AuthUser): Pr
 }
 
 /** Sends the captured statements at once over a pool of plain mariadb connections, as the service's Promise.all does. */
-export async function rawBoard(db: { port: number; database: string }, statements: string[], times: number): Promise<Timing> {
-  const pool = mariadb.createPool({ host: '127.0.0.1', port: db.port, user: 'root', database: db.database, connectionLimit: Math.max(2, statements.length) });
+export async function rawBoard(url: string, statements: string[], times: number): Promise<Timing> {
+  const u = new URL(url);
+  const pool = mariadb.createPool({
+    host: u.hostname, port: Number(u.port), user: decodeURIComponent(u.username), password: decodeURIComponent(u.password),
+    database: u.pathname.slice(1), connectionLimit: Math.max(2, statements.length),
+  });
   try {
     return await timeIt(times, () => Promise.all(statements.map((sql) => pool.query(sql))));
   } finally {
