@@ -108,7 +108,7 @@ function toRow(r: RawRow, scope: Scope): BoardRow {
 async function scopeFor(actor: AuthUser): Promise<Scope> {
   if (!mayViewBoard(actor.role)) throw forbidden('The board is for supervisors, admins and viewers.');
   const now = clock.now();
-  return { organisationId: actor.organisationId, siteIds: await visibleSiteIds(actor), now, soon: new Date(now.getTime() + DUE_SOON_HOURS * 3600_000) };
+  return { organisationId: actor.organisationId, siteIds: visibleSiteIds(actor), now, soon: new Date(now.getTime() + DUE_SOON_HOURS * 3600_000) };
 }
 
 async function selectRows(sequelize: Sequelize, scope: Scope, f: BoardFilters, limit: number, offset: number): Promise<BoardRow[]> {
