@@ -53,6 +53,12 @@ const recordRoutes = (k: 'given' | 'other') => [
   `/api/assets/${ids[k].asset}`,
   `/api/assets/${ids[k].asset}/readings`,
   `/api/assets/${ids[k].asset}/label/retired`,
+  `/api/assets/${ids[k].asset}/connections`,
+  `/api/assets/${ids[k].asset}/isolation-plan`,
+  `/api/assets/${ids[k].asset}/closing-affects`,
+  `/api/plant-rooms/${ids[k].room}/diagram`,
+  `/api/sites/${ids[k].site}/since-my-last-visit`,
+  `/api/plant-rooms/${ids[k].room}/since-my-last-visit`,
   `/api/tags/${ids[k].tag}`,
   `/api/photos/${ids[k].photo}`,
   `/api/photos/${ids[k].photo}/thumbnail`,
@@ -104,6 +110,9 @@ describe('a viewer limited to some sites', () => {
     expect(rows.map((r) => r.plantId)).toEqual(['P-GIVEN']);
     const asked = parse((await viewer.get(`/api/assets/export.csv?siteId=${ids.other.site}`)).text, { bom: true, columns: true });
     expect(asked).toEqual([]);
+    const connections = await viewer.get('/api/connections/export.csv');
+    expect(connections.status).toBe(200);
+    expect(connections.text).not.toContain('Larch other');
     const board = await viewer.get('/api/board.csv');
     expect(board.status).toBe(200);
     expect(board.text).toContain('Larch given');
