@@ -26,17 +26,17 @@ export function accountRoutes({ sequelize, config }: AppContext) {
       res.status(options.statusCode).json({ error: { code: 'rate-limited', message: 'Too many attempts. Wait a few minutes and try again.' } });
     },
   });
-  router.post('/auth/password/reset-request', limiter, validate(resetRequestSchema), async (req, res) => {
+  router.post('/auth/password/reset-request', limiter, validate({ body: resetRequestSchema }), async (req, res) => {
     await requestPasswordReset(sequelize, req.body, req.ip ?? null);
     res.status(202).json(RESET_REQUEST_ANSWER);
   });
-  router.post('/auth/password/set', limiter, validate(setPasswordSchema), async (req, res) => {
+  router.post('/auth/password/set', limiter, validate({ body: setPasswordSchema }), async (req, res) => {
     res.json(await setPasswordWithToken(sequelize, config, req.body, req.ip ?? null));
   });
   router.get('/me/settings', auth(config.jwtSecret), async (req, res) => {
     res.json(await getMySettings(currentUser(req)));
   });
-  router.patch('/me/settings', auth(config.jwtSecret), validate(mySettingsSchema), async (req, res) => {
+  router.patch('/me/settings', auth(config.jwtSecret), validate({ body: mySettingsSchema }), async (req, res) => {
     res.json(await updateMySettings(sequelize, currentUser(req), req.body));
   });
   return router;

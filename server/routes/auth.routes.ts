@@ -22,7 +22,7 @@ export function authRoutes({ config }: AppContext) {
     },
   });
 
-  router.post('/auth/login', loginLimiter, validate(signInSchema), async (req, res) => {
+  router.post('/auth/login', loginLimiter, validate({ body: signInSchema }), async (req, res) => {
     res.json(await signIn(req.body, config, req.ip ?? null));
   });
   router.post('/auth/logout', auth(config.jwtSecret), async (req, res) => {

@@ -6,13 +6,14 @@ import { addTagNote, clearInAbsence, clearTag, extendTag, handOverTag } from '@/
 import { addTagPhoto, getTag, listTags, raiseTag } from '@/server/services/tags.service';
 import { MAX_PHOTO_BYTES } from '@/server/lib/photo-processing';
 import { requireFile, singleFileUpload } from '@/server/lib/uploads';
+import { parseId } from '@/server/services/register-access';
 import { readPaging } from '@/shared/rules/paging';
 import { clearInAbsenceSchema, clearTagSchema, extendTagSchema, handoverSchema, raiseTagSchema, tagNoteSchema } from '@/shared/schemas/tags';
 
 export function tagsRoutes({ config, sequelize, storage }: AppContext) {
   const router = Router();
   const authed = auth(config.jwtSecret);
-  const id = (raw: unknown) => Number(raw);
+  const id = parseId;
 
   router.post('/assets/:id/tags', authed, validate(raiseTagSchema), async (req, res) => {
     const key = req.get('idempotency-key')?.slice(0, 100) || null;
