@@ -1,9 +1,8 @@
 import { Router } from 'express';
 import type { AppContext } from '@/server/app';
 import { auth, currentUser, requirePermission } from '@/server/middleware/auth';
-import { validate } from '@/server/middleware/validate';
+import { parseId, validate } from '@/server/middleware/validate';
 import { getSystem, listSystems, parseSystemName, saveSystem, systemExpansionCheck } from '@/server/services/heating-systems.service';
-import { parseId } from '@/server/services/register-access';
 import { heatingSystemSchema } from '@/shared/schemas/readings';
 
 /** Design values per heating system (site + the `system` text on its items) and the vessel check. */

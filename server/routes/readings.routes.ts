@@ -1,8 +1,7 @@
 import { Router } from 'express';
 import type { AppContext } from '@/server/app';
 import { auth, currentUser, requirePermission } from '@/server/middleware/auth';
-import { validate } from '@/server/middleware/validate';
-import { parseId } from '@/server/services/register-access';
+import { parseId, validate } from '@/server/middleware/validate';
 import { correctReading, listReadings, logReadings } from '@/server/services/readings.service';
 import { readPaging } from '@/shared/rules/paging';
 import { readingCorrectionSchema, readingSetSchema } from '@/shared/schemas/readings';

@@ -1,12 +1,11 @@
 import { Router } from 'express';
 import type { AppContext } from '@/server/app';
 import { auth, currentUser } from '@/server/middleware/auth';
-import { validate } from '@/server/middleware/validate';
+import { parseId, validate } from '@/server/middleware/validate';
 import { addTagNote, clearInAbsence, clearTag, extendTag, handOverTag } from '@/server/services/tag-actions.service';
 import { addTagPhoto, getTag, listTags, raiseTag } from '@/server/services/tags.service';
 import { MAX_PHOTO_BYTES } from '@/server/lib/photo-processing';
 import { requireFile, singleFileUpload } from '@/server/lib/uploads';
-import { parseId } from '@/server/services/register-access';
 import { readPaging } from '@/shared/rules/paging';
 import { clearInAbsenceSchema, clearTagSchema, extendTagSchema, handoverSchema, raiseTagSchema, tagNoteSchema } from '@/shared/schemas/tags';
 
