@@ -6,7 +6,8 @@ import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
 import type { ServerConfig } from '@/server/config';
-import { logger } from '@/server/lib/logger';
+import { logger, redactUrl } from '@/server/lib/logger';
+import type { Logger } from 'pino';
 import { errorHandler, notFoundApi } from '@/server/middleware/error-handler';
 import { authRoutes } from '@/server/routes/auth.routes';
 import { calcRoutes } from '@/server/routes/calc.routes';
@@ -18,6 +19,7 @@ import { tagsRoutes } from '@/server/routes/tags.routes';
 import { usersRoutes } from '@/server/routes/users.routes';
 import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import type { PhotoStorage } from '@/server/lib/photo-storage';
+import type { LauncherStatus } from '@/server/services/health.service';
 import { assetsRoutes } from '@/server/routes/assets.routes';
 import { photosRoutes } from '@/server/routes/photos.routes';
 import { plantRoomsRoutes } from '@/server/routes/plant-rooms.routes';
@@ -25,6 +27,9 @@ import { sitesRoutes } from '@/server/routes/sites.routes';
 import { boardRoutes } from '@/server/routes/board.routes';
 import { teamRoutes } from '@/server/routes/team.routes';
 import { accountRoutes } from '@/server/routes/account.routes';
+import { connectionsRoutes } from '@/server/routes/connections.routes';
+import { meRoutes } from '@/server/routes/me.routes';
+import { visitsRoutes } from '@/server/routes/visits.routes';
 import { webStatic } from '@/server/lib/web-static';
 
 export interface AppContext {
@@ -32,6 +37,10 @@ export interface AppContext {
   config: ServerConfig;
   /** Photo files; made from config.storage when not given. */
   storage?: PhotoStorage;
+  /** The state of the private mariadbd when this process launched it, for /api/health. */
+  launcher?: () => LauncherStatus;
+  /** Where request lines go; by default the server's logger (none under NODE_ENV=test). */
+  requestLog?: Logger;
 }
 
 /** Builds the Express app; never listens (server/index.ts does). */
@@ -64,12 +73,13 @@ export function createApp(ctx: AppContext) {
       strictTransportSecurity: false,
     }),
   );
-  if (process.env.NODE_ENV !== 'test') app.use(
+  const log = ctx.requestLog ?? (process.env.NODE_ENV === 'test' ? null : logger);
+  if (log) app.use(
       pinoHttp({
-        logger,
+        logger: log,
         autoLogging: { ignore: (req) => req.url === '/api/health' },
-        // One short line per request: no headers, so no tokens in the log.
-        serializers: { req: (req) => ({ method: req.method, url: req.url }), res: (res) => ({ statusCode: res.statusCode }) },
+        // One short line per request: no headers, and one-time tokens cut out of the URL.
+        serializers: { req: (req) => ({ method: req.method, url: redactUrl(req.url) }), res: (res) => ({ statusCode: res.statusCode }) },
       }),
     );
 
@@ -84,6 +94,7 @@ export function createApp(ctx: AppContext) {
   api.use(sitesRoutes(ctx));
   api.use(plantRoomsRoutes(ctx));
   api.use(assetsRoutes(ctx));
+  api.use(connectionsRoutes(ctx));
   api.use(photosRoutes(ctx));
   api.use(calcRoutes(ctx));
   api.use(readingsRoutes(ctx));
@@ -93,6 +104,8 @@ export function createApp(ctx: AppContext) {
   api.use(boardRoutes(ctx));
   api.use(teamRoutes(ctx));
   api.use(accountRoutes(ctx));
+  api.use(visitsRoutes(ctx));
+  api.use(meRoutes(ctx));
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -1,7 +1,9 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ValidationError } from 'yup';
 import { HttpError } from '@/server/lib/http-error';
-import { logger } from '@/server/lib/logger';
+import { isDatabaseUnavailable } from '@/server/db-errors';
+import { logger, redactUrl } from '@/server/lib/logger';
+import { BusyError } from '@/server/lib/work-limit';
 import { fieldErrors } from '@/shared/schemas/field-errors';
 import type { ApiErrorBody, ErrorCode } from '@/shared/types/api';
 
@@ -16,6 +18,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     return;
   }
   if (err instanceof HttpError) {
+    if (err instanceof BusyError) res.set('Retry-After', String(err.retryAfterSeconds));
     res.status(err.status).json({ error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } });
     return;
   }
@@ -27,6 +30,12 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     res.status(status).json({ error: { code, message } } satisfies ApiErrorBody);
     return;
   }
-  logger.error({ err, method: req.method, url: req.originalUrl }, 'unhandled error');
+  // The database down, restarting or stalled: the client may retry shortly (its idempotency key makes that safe).
+  if (isDatabaseUnavailable(err)) {
+    logger.warn({ err: { message: err.message, name: err.name }, method: req.method, url: redactUrl(req.originalUrl) }, 'database unavailable');
+    res.set('Retry-After', '5').status(503).json({ error: { code: 'unavailable', message: 'The database is not answering just now. Please try again in a few seconds.' } } satisfies ApiErrorBody);
+    return;
+  }
+  logger.error({ err, method: req.method, url: redactUrl(req.originalUrl) }, 'unhandled error');
   res.status(500).json({ error: { code: 'server-error', message: 'Something went wrong on the server. It has been logged; please try again.' } });
 };

@@ -5,7 +5,7 @@ import { requireFile, singleFileUpload } from '@/server/lib/uploads';
 import { auth, currentUser, requirePermission } from '@/server/middleware/auth';
 import { pathId, validate } from '@/server/middleware/validate';
 import { addPhoto } from '@/server/services/photos.service';
-import { createPlantRoom, getPlantRoom, updatePlantRoom } from '@/server/services/plant-rooms.service';
+import { createPlantRoom, openPlantRoom, updatePlantRoom } from '@/server/services/plant-rooms.service';
 import { plantRoomPatchSchema, plantRoomSchema } from '@/shared/schemas/register';
 import { idParams } from '@/shared/schemas/request';
 
@@ -18,7 +18,7 @@ export function plantRoomsRoutes({ config, storage }: AppContext) {
     res.status(201).json(await createPlantRoom(currentUser(req), req.body));
   });
   router.get('/plant-rooms/:id', signedIn, validate({ params: idParams }), async (req, res) => {
-    res.json(await getPlantRoom(currentUser(req), pathId(req)));
+    res.json(await openPlantRoom(currentUser(req), pathId(req)));
   });
   router.patch('/plant-rooms/:id', signedIn, editors, validate({ params: idParams, body: plantRoomPatchSchema }), async (req, res) => {
     res.json(await updatePlantRoom(currentUser(req), pathId(req), req.body));

@@ -42,6 +42,10 @@ export const ROLE_PERMISSIONS = {
   administerTeam: ['admin'],
   /** Read the audit log. */
   viewAudit: ['admin'],
+  /** Start and end one's own visits to a site. */
+  recordVisits: ['admin', 'supervisor', 'engineer'],
+  /** Read everyone's visits, filter them by person, and receive end-of-visit summaries. */
+  superviseVisits: ['admin', 'supervisor'],
   /** E-mails about every tag in the organisation (raised, cleared, morning digest). */
   receiveOrganisationMail: ['admin', 'supervisor'],
   /** E-mails about the tags one holds (cleared in absence, taken over). */

@@ -19,11 +19,12 @@ export type ErrorCode =
   | 'unauthenticated' | 'invalid-credentials' | 'forbidden' | 'not-found' | 'no-such-label' | 'photo-file-missing'
   // 409: the record is not in a state that allows it
   | 'conflict' | 'already-cleared' | 'already-holder' | 'already-joined' | 'archived' | 'email-taken' | 'inactive'
-  | 'last-admin' | 'own-tag' | 'self'
+  | 'last-admin' | 'own-tag' | 'self' | 'visit-in-progress' | 'visit-ended'
   // 413, 415, 422: what was sent cannot be used
   | 'file-too-large' | 'entity.too.large' | 'too-many-labels' | 'unsupported-image' | 'invalid' | 'image-too-large' | 'unreadable-image'
+  | 'undecided-tags'
   // 429, 5xx
-  | 'rate-limited' | 'server-error' | 'unavailable'
+  | 'rate-limited' | 'server-error' | 'unavailable' | 'busy'
   // made up by the client when there is no answer to read
   | 'offline' | 'http-error' | 'bad-url';
 

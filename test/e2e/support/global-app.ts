@@ -5,9 +5,10 @@ import type { TestProject } from 'vitest/node';
 import { createApp } from '@/server/app';
 import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import { readConfig } from '@/server/config';
-import { createSequelize, migrate } from '@/server/db';
+import { createSequelize, prepareDatabase } from '@/server/db';
 import { seedDemo } from '@/server/seed/demo';
-import { asRoot, freePort, startPrivateMariaDb } from '@/scripts/lib/mariadb';
+import { freePort, startPrivateMariaDb } from '@/scripts/lib/mariadb';
+import { localAccounts, provisionDatabase } from '@/scripts/lib/local-db';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -20,9 +21,10 @@ export default async function setup(project: TestProject) {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'isoledger-e2e-'));
   const dbPort = await freePort();
   const db = await startPrivateMariaDb({ dataDir: path.join(dataDir, 'mariadb'), port: dbPort });
-  await asRoot(dbPort, ['CREATE DATABASE isoledger CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci']);
-  const sequelize = createSequelize(`mariadb://root@127.0.0.1:${dbPort}/isoledger`);
-  await migrate(sequelize);
+  // The same two accounts as npm start: migrations as the owner, the app on the server's restricted account.
+  const { ownerUrl, serverUrl } = await provisionDatabase(db, localAccounts(dataDir));
+  await prepareDatabase(ownerUrl, serverUrl);
+  const sequelize = createSequelize(serverUrl);
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
   // Every e2e test signs the demo users in afresh; the sign-in rate limit itself is covered by the API tests.
