@@ -48,6 +48,9 @@ export function galeraArgs(all: GaleraNodePorts[], index: number, clusterName: s
     '--wsrep-sst-method=rsync',
     `--wsrep-sst-receive-address=127.0.0.1:${me.sst}`,
     '--default-storage-engine=InnoDB',
+    // Each commit is on the other nodes before it is acknowledged; rsync SST of a node's binary logs fails in this
+    // MariaDB release, so loopback nodes keep none (a production cluster keeps them on a separate volume).
+    '--skip-log-bin',
     // Galera needs interleaved auto-increment locks; each node then hands out its own residue of ids.
     '--innodb-autoinc-lock-mode=2',
   ];
@@ -84,6 +87,16 @@ function chooseBootstrapNode(dirs: string[], log: (line: string) => void): numbe
 export async function startGaleraCluster(opts: { dataDir: string; ports: GaleraNodePorts[]; log?: (line: string) => void; name?: string }): Promise<GaleraCluster> {
   const log = opts.log ?? (() => {});
   const dirs = opts.ports.map((_, i) => path.join(path.resolve(opts.dataDir), `node${i + 1}`));
+  // Started by root, the nodes run as `mysql`, which must be able to reach their folders: the cluster folder and
+  // DATA_DIR above it are opened for traversal; any folder further up must already be.
+  fs.mkdirSync(opts.dataDir, { recursive: true });
+  if (process.getuid?.() === 0) {
+    const own = [path.resolve(opts.dataDir), path.dirname(path.resolve(opts.dataDir))];
+    for (const dir of own) fs.chmodSync(dir, fs.statSync(dir).mode | 0o011);
+    for (let dir = path.dirname(own[1]); dir !== path.dirname(dir); dir = path.dirname(dir)) {
+      if ((fs.statSync(dir).mode & 0o001) === 0) throw new Error(`${dir} is closed to other users, so the Galera nodes (running as mysql) cannot reach ${opts.dataDir}: choose a DATA_DIR elsewhere`);
+    }
+  }
   const first = chooseBootstrapNode(dirs, log);
   const order = [first, ...dirs.map((_, i) => i).filter((i) => i !== first)];
   const nodes: PrivateMariaDb[] = [];
@@ -101,6 +114,7 @@ export async function startGaleraCluster(opts: { dataDir: string; ports: GaleraN
         extraArgs: galeraArgs(opts.ports, i, opts.name ?? 'isoledger'),
         firstStartArgs: i === first ? ['--wsrep-new-cluster'] : [],
         isReady: isSynced,
+        runAs: 'mysql',
       });
       started.push(node);
       nodes[i] = node;

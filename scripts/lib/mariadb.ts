@@ -36,6 +36,11 @@ export interface StartOptions {
   isReady?: (conn: mariadb.Connection) => Promise<boolean>;
   /** Restart mariadbd with backoff when it dies (default true). */
   restart?: boolean;
+  /**
+   * The operating-system account mariadbd runs as when started by root (default root). A Galera node runs as
+   * `mysql`, because the rsync state transfer's daemon, started by root, would write as `nobody`.
+   */
+  runAs?: string;
 }
 
 export function findBinary(name: string): string {
@@ -83,11 +88,13 @@ export async function startPrivateMariaDb(opts: StartOptions): Promise<PrivateMa
   const log = opts.log ?? (() => {});
   fs.mkdirSync(dataDir, { recursive: true });
   const isRoot = process.getuid?.() === 0;
+  const runAs = opts.runAs ?? 'root';
+  if (isRoot && runAs !== 'root') spawnSync('chown', ['-R', `${runAs}:`, dataDir]);
   if (!fs.existsSync(path.join(dataDir, 'mysql'))) {
     log(`initialising a private MariaDB data folder in ${dataDir}`);
     // Socket authentication for root (and the operating-system user): no password-less login over TCP.
     const args = ['--no-defaults', `--datadir=${dataDir}`, '--auth-root-authentication-method=socket', '--skip-test-db'];
-    if (isRoot) args.push('--user=root');
+    if (isRoot) args.push(`--user=${runAs}`);
     const result = spawnSync(findBinary('mariadb-install-db'), args, { encoding: 'utf8' });
     if (result.status !== 0) throw new Error(`mariadb-install-db failed:\n${result.stdout}\n${result.stderr}`);
   }
@@ -96,7 +103,7 @@ export async function startPrivateMariaDb(opts: StartOptions): Promise<PrivateMa
     throw new Error(`port ${opts.port} on 127.0.0.1 is already in use; set DB_PORT to a free port`);
   }
   const args = [...mariadbdArgs(dataDir, opts.port), ...(opts.extraArgs ?? [])];
-  if (isRoot) args.push('--user=root');
+  if (isRoot) args.push(`--user=${runAs}`);
 
   const status: LauncherStatus = { up: false, restarts: 0, lastExit: null };
   let child: ChildProcess | undefined;
