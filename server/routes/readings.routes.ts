@@ -16,7 +16,8 @@ export function readingsRoutes({ config }: AppContext) {
     res.json(await listReadings(currentUser(req), parseId(req.params.id), readPaging(req.query)));
   });
   router.post('/assets/:id/readings', authed, recorders, validate(readingSetSchema), async (req, res) => {
-    res.status(201).json(await logReadings(currentUser(req), parseId(req.params.id), req.body));
+    const key = req.get('idempotency-key')?.slice(0, 100) || null;
+    res.status(201).json(await logReadings(currentUser(req), parseId(req.params.id), req.body, key));
   });
   // Author only (checked in the service): a correction is a new set that supersedes the original.
   router.post('/readings/:id/correct', authed, recorders, validate(readingCorrectionSchema), async (req, res) => {
