@@ -7,9 +7,14 @@ type IconName = ComponentProps<typeof MaterialCommunityIcons>['name'];
 
 export const ENERGY_SOURCE_ICONS: Record<EnergySource, IconName> = {
   gas: 'fire',
+  oil: 'oil',
   electrical: 'flash',
+  'stored-charge': 'battery-charging-high',
   'stored-pressure': 'gauge',
+  'mains-make-up': 'water-pump',
   'hot-water': 'water-thermometer',
+  refrigerant: 'snowflake',
+  pneumatic: 'air-filter',
   mechanical: 'cog',
   chemical: 'flask-outline',
 };

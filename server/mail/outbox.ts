@@ -11,6 +11,7 @@ export const MAIL_KINDS = [
   'digest',
   'invite',
   'password-reset',
+  'visit-summary',
 ] as const;
 export type MailKind = (typeof MAIL_KINDS)[number];
 

@@ -15,14 +15,28 @@ export const ASSET_TYPE_LABELS: Record<AssetType, string> = {
   other: 'Other',
 };
 
-export const ENERGY_SOURCES = ['gas', 'electrical', 'stored-pressure', 'hot-water', 'mechanical', 'chemical'] as const;
+/**
+ * Every kind of energy an isolation must account for (OSHA 29 CFR 1910.147(b) "energy source": electrical,
+ * mechanical, hydraulic, pneumatic, chemical, thermal or other). Added for building services: oil, a mains
+ * make-up feed that can re-pressurise an isolated section, refrigerant, and stored electrical charge such as the
+ * DC-link capacitors of a variable-speed drive (1910.147(d)(5) stored energy).
+ */
+export const ENERGY_SOURCES = [
+  'gas', 'oil', 'electrical', 'stored-charge', 'stored-pressure', 'mains-make-up', 'hot-water',
+  'refrigerant', 'pneumatic', 'mechanical', 'chemical',
+] as const;
 export type EnergySource = (typeof ENERGY_SOURCES)[number];
 
 export const ENERGY_SOURCE_LABELS: Record<EnergySource, string> = {
   gas: 'Gas',
+  oil: 'Oil (fuel supply)',
   electrical: 'Electrical',
+  'stored-charge': 'Stored charge (drive capacitors)',
   'stored-pressure': 'Stored pressure',
+  'mains-make-up': 'Mains make-up feed',
   'hot-water': 'Hot water or steam',
+  refrigerant: 'Refrigerant',
+  pneumatic: 'Pneumatic (compressed air)',
   mechanical: 'Mechanical / rotating',
   chemical: 'Chemical',
 };

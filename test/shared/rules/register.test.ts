@@ -1,6 +1,18 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { addMonths, isServiceOverdue, nextServiceDue } from '@/shared/rules/register';
+import { addMonths, ENERGY_SOURCES, ENERGY_SOURCE_LABELS, isServiceOverdue, nextServiceDue } from '@/shared/rules/register';
+
+describe('ENERGY_SOURCES', () => {
+  it('names the energy kinds an isolation must account for, each with a label', () => {
+    // OSHA 29 CFR 1910.147(b) "Energy source": electrical, mechanical, hydraulic, pneumatic, chemical, thermal, or other energy.
+    expect(ENERGY_SOURCES).toEqual(expect.arrayContaining(['electrical', 'mechanical', 'pneumatic', 'chemical', 'hot-water']));
+    // OSHA 29 CFR 1910.147(d)(5)(i): stored or residual energy (such as that in capacitors, springs, air, gas, steam, or water pressure) shall be relieved.
+    expect(ENERGY_SOURCES).toEqual(expect.arrayContaining(['stored-charge', 'stored-pressure']));
+    // common practice, no published source: fuel oil, a mains make-up feed that re-pressurises a section, and refrigerant circuits are isolated separately in building services.
+    expect(ENERGY_SOURCES).toEqual(expect.arrayContaining(['oil', 'mains-make-up', 'refrigerant']));
+    for (const s of ENERGY_SOURCES) expect(ENERGY_SOURCE_LABELS[s].length).toBeGreaterThan(2);
+  });
+});
 
 describe('nextServiceDue', () => {
   it.each([
