@@ -50,13 +50,6 @@ function gasFamilyOf(asset: Asset): GasFamily | null {
   return asset.energySources.includes('gas') && (asset.type === 'boiler' || asset.type === 'water-heater') ? 'natural-gas' : null;
 }
 
-/** A system name from the URL: trimmed, 1–120 characters (as the asset's `system` field). */
-export function parseSystemName(raw: unknown): string {
-  const name = typeof raw === 'string' ? raw.trim() : '';
-  if (!name || name.length > 120) throw new HttpError(400, 'bad-system', 'Name a system of up to 120 characters.');
-  return name;
-}
-
 function toDto(siteId: number, name: string, row: HeatingSystemRow | null, assetCount: number): HeatingSystem {
   const values = Object.fromEntries(VALUE_KEYS.map((k) => [k, row?.[k] ?? null])) as Pick<HeatingSystem, (typeof VALUE_KEYS)[number]>;
   return {

@@ -70,7 +70,7 @@ export function checkExpansionVessel(
   const meanC = (fillC + maxC) / 2;
   const cp = step({
     key: 'specific-heat', label: `Specific heat of ${fill.name} at the mean temperature`, formula: 'c_p((T_fill + T_max)/2)',
-    substituted: `c_p(${f(meanC)} °C)`, value: fill.cp(meanC) / 1000, unit: 'kJ/(kg·K)',
+    substituted: `c_p = c_p(${f(meanC)} °C)`, value: fill.cp(meanC) / 1000, unit: 'kJ/(kg·K)',
     source: fill.source === GLYCOL_SOURCE ? GLYCOL_SOURCE : 'IAPWS-IF97 region 1',
   }) * 1000;
   const expansionL = step({

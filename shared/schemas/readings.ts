@@ -17,6 +17,7 @@ import {
   type WaterAppearance,
 } from '@/shared/calc';
 import { READING_VALUE_KEYS } from '@/shared/rules/reading-keys';
+import { idField } from '@/shared/schemas/request';
 
 // A reading may be logged a little ahead of the server clock (phone clocks drift).
 const CLOCK_SKEW_MS = 5 * 60_000;
@@ -141,3 +142,9 @@ export type HeatingSystemInput = InferType<typeof heatingSystemSchema>;
 /** Calculator inputs (litres, °C, metres, bar gauge) with an optional choice of pre-charge margin. */
 export const expansionVesselRequestSchema = expansionVesselInputsSchema.shape({ preChargeMarginBar });
 export type ExpansionVesselRequest = InferType<typeof expansionVesselRequestSchema>;
+
+/** `/sites/:id/systems/:name`: the system is the `system` text on the site's items, 1–120 characters. */
+export const systemParams = object({
+  id: idField().required(),
+  name: string().trim().required('Name a system of up to 120 characters.').max(120, 'Name a system of up to 120 characters.'),
+});
