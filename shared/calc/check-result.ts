@@ -45,6 +45,8 @@ export interface CheckResult {
   inputs: CheckInput[];
   value: number;
   unit: string;
+  /** For a result that is a category (a test kit's answer), the words shown instead of the number. */
+  valueText?: string;
   /** The limit or band the value is compared with, in words ("store ≥ 60 °C"). */
   limit?: string;
   /** Where the limit comes from: a standard's clause, a guide, or "common practice, no published source". */

@@ -34,12 +34,12 @@ export interface WaterTreatmentReadings {
   waterAppearance?: WaterAppearance | null;
 }
 
-/** Results carry the category as a number so they sit with the measured checks: its index in the list. */
+/** Category results carry their index in the list as the value and their words as `valueText`. */
 export function waterTreatmentChecks(r: WaterTreatmentReadings): CheckResult[] {
   const results: CheckResult[] = [];
   if (r.inhibitorResult) {
     const result: CheckResult = {
-      key: 'inhibitor', label: `Inhibitor: ${INHIBITOR_LABELS[r.inhibitorResult]}`, formula: 'Test kit reading within its stated range',
+      key: 'inhibitor', label: 'Inhibitor', valueText: INHIBITOR_LABELS[r.inhibitorResult], formula: 'Test kit reading within its stated range',
       inputs: [], value: INHIBITOR_RESULTS.indexOf(r.inhibitorResult), unit: '', limit: 'Within the kit’s range', source: INHIBITOR_SOURCE,
     };
     if (r.inhibitorResult === 'low' || r.inhibitorResult === 'none') {
@@ -69,7 +69,7 @@ export function waterTreatmentChecks(r: WaterTreatmentReadings): CheckResult[] {
   }
   if (r.waterAppearance) {
     const result: CheckResult = {
-      key: 'water-appearance', label: `Appearance: ${WATER_APPEARANCE_LABELS[r.waterAppearance]}`, formula: 'Sample looked at in a clear container',
+      key: 'water-appearance', label: 'Appearance', valueText: WATER_APPEARANCE_LABELS[r.waterAppearance], formula: 'Sample looked at in a clear container',
       inputs: [], value: WATER_APPEARANCES.indexOf(r.waterAppearance), unit: '', limit: 'Clear or slightly cloudy',
       source: 'Common practice, no published source.',
     };
