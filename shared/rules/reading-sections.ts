@@ -24,7 +24,8 @@ export const READING_SECTIONS: ReadingSection[] = [
   { key: 'flue', title: 'Flue-gas analysis', fields: ['flueO2Percent', 'flueCo2Percent', 'flueCoPpm', 'flueTemperatureC', 'combustionEfficiencyPercent'] },
 ];
 
-const BY_TYPE: Record<AssetType, ReadingSectionKey[]> = {
+// A type not listed here offers every section.
+const BY_TYPE: Partial<Record<AssetType, ReadingSectionKey[]>> = {
   boiler: ['heating', 'weather', 'pressure', 'gas', 'flue'],
   pump: ['heating', 'pressure', 'pump'],
   actuator: ['heating'],
@@ -34,12 +35,17 @@ const BY_TYPE: Record<AssetType, ReadingSectionKey[]> = {
   'water-heater': ['hot-water'],
   'control-panel': ['heating', 'weather'],
   'terminal-unit': ['heating'],
-  other: READING_SECTIONS.map((s) => s.key),
+  'gas-supply': ['gas'],
+  'water-supply': ['pressure'],
+  'electrical-supply': [],
+  'distribution-board': [],
+  isolator: [],
+  pipework: ['heating', 'pressure'],
 };
 
 /** The sections an item offers; a gas-fired water heater also offers gas and flue gas. */
 export function readingSectionsFor(type: AssetType, energySources: readonly EnergySource[] = []): ReadingSection[] {
-  const keys = new Set(BY_TYPE[type] ?? BY_TYPE.other);
+  const keys = new Set(BY_TYPE[type] ?? READING_SECTIONS.map((s) => s.key));
   if (type === 'water-heater' && energySources.includes('gas')) {
     keys.add('gas');
     keys.add('flue');
