@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Platform, StyleSheet, View } from 'react-native';
 import QRCode from 'react-native-qrcode-svg';
-import { colors, radius, space } from '@/components/theme';
+import { colors, printColors, radius, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
@@ -28,7 +28,7 @@ export function AssetLabelCard({ asset }: { asset: Asset }) {
       <Text variant="title">Plant label</Text>
       <View style={styles.row}>
         <View style={styles.qr} testID="asset-label-qr">
-          <QRCode value={labelUrl(origin(), asset.labelCode)} size={148} ecl="M" quietZone={12} backgroundColor={colors.surface} color={colors.ink} />
+          <QRCode value={labelUrl(origin(), asset.labelCode)} size={148} ecl="M" quietZone={12} backgroundColor={printColors.paper} color={printColors.ink} />
         </View>
         <View style={{ flex: 1, minWidth: 160, gap: space.xs }}>
           <Text variant="small" muted>Label code</Text>
@@ -59,5 +59,5 @@ export function AssetLabelCard({ asset }: { asset: Asset }) {
 
 const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.lg },
-  qr: { padding: space.sm, backgroundColor: colors.surface, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line },
+  qr: { padding: space.sm, backgroundColor: printColors.paper, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line },
 });

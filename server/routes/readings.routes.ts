@@ -17,7 +17,8 @@ export function readingsRoutes({ config }: AppContext) {
     res.json(await listReadings(currentUser(req), pathId(req), readPaging(req.query)));
   });
   router.post('/assets/:id/readings', signedIn, recorders, validate({ params: idParams, body: readingSetSchema }), async (req, res) => {
-    res.status(201).json(await logReadings(currentUser(req), pathId(req), req.body));
+    const key = req.get('idempotency-key')?.slice(0, 100) || null;
+    res.status(201).json(await logReadings(currentUser(req), pathId(req), req.body, key));
   });
   // Author only (checked in the service): a correction is a new set that supersedes the original.
   router.post('/readings/:id/correct', signedIn, recorders, validate({ params: idParams, body: readingCorrectionSchema }), async (req, res) => {
