@@ -9,6 +9,7 @@ import { Reading } from '@/server/models/reading.model';
 import { User } from '@/server/models/user.model';
 import { registerContextFor } from '@/server/services/heating-systems.service';
 import { toReadingSet } from '@/server/services/readings-dto';
+import { pickReadingValues } from '@/shared/rules/reading-keys';
 import { resolveCheckSettings, runReadingChecks } from '@/shared/rules/readings';
 import type { ReadingCorrectionInput, ReadingSetInput } from '@/shared/schemas/readings';
 import type { ReadingList, ReadingSet, ReadingValues } from '@/shared/types/readings';
@@ -32,13 +33,7 @@ async function findAsset(actor: AuthUser, id: number): Promise<Asset> {
 }
 
 const values = (input: ReadingSetInput): ReadingValues => ({
-  flowTemperatureC: input.flowTemperatureC ?? null,
-  returnTemperatureC: input.returnTemperatureC ?? null,
-  flowSetpointC: input.flowSetpointC ?? null,
-  flowRateM3PerS: input.flowRateM3PerS ?? null,
-  systemPressureGaugePa: input.systemPressureGaugePa ?? null,
-  pumpInletPressureGaugePa: input.pumpInletPressureGaugePa ?? null,
-  pumpOutletPressureGaugePa: input.pumpOutletPressureGaugePa ?? null,
+  ...pickReadingValues(input),
   surfaceTemperatures: (input.surfaceTemperatures ?? []).map((s) => ({ location: s.location, temperatureC: s.temperatureC })),
 });
 
