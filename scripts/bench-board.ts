@@ -15,7 +15,8 @@ import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import { User } from '@/server/models/user.model';
 import { UserSiteAccess } from '@/server/models/user-site-access.model';
 import { DEMO_PASSWORD, seedDemo } from '@/server/seed/demo';
-import { getBoard, readBoardFilters } from '@/server/services/board.service';
+import { getBoard } from '@/server/services/board.service';
+import { boardQuery } from '@/shared/schemas/queries';
 import { seedBenchTags } from '@/scripts/lib/bench-tags';
 import { freePort, startPrivateMariaDb } from '@/scripts/lib/mariadb';
 import { localAccounts, provisionDatabase } from '@/scripts/lib/local-db';
@@ -79,7 +80,7 @@ async function main() {
     const inProcess: number[] = [];
     for (let i = 0; i < REQUESTS; i += 1) {
       const t1 = performance.now();
-      await getBoard(sequelize, actor, readBoardFilters({}), { page: 1, pageSize: 50, offset: 0 });
+      await getBoard(sequelize, actor, boardQuery.validateSync({}), { page: 1, pageSize: 50, offset: 0 });
       inProcess.push(performance.now() - t1);
     }
     say(`${'default view, service only (no HTTP)'.padEnd(34)} ${stats(inProcess)}`);

@@ -9,14 +9,15 @@ import { Text } from '@/components/ui/text';
 import { AuditLog } from '@/components/team/audit-log';
 import { InviteForm } from '@/components/team/invite-form';
 import { MemberCard } from '@/components/team/member-card';
+import { UndeliveredMail } from '@/components/team/undelivered-mail';
 import { errorMessage } from '@/hooks/api/request';
-import { useMeQuery } from '@/hooks/api/use-auth';
 import { useSitesQuery } from '@/hooks/api/use-sites';
 import { useTeamQuery } from '@/hooks/api/use-team';
+import { usePermissions } from '@/hooks/auth/use-permissions';
 
 export default function TeamScreen() {
-  const me = useMeQuery().data;
-  const isAdmin = me?.role === 'admin';
+  const { actor: me, may } = usePermissions();
+  const isAdmin = may('administerTeam');
   const { isWide } = useBreakpoints();
   const team = useTeamQuery(isAdmin);
   const sites = useSitesQuery();
@@ -34,6 +35,7 @@ export default function TeamScreen() {
   return (
     <Screen title="Team" subtitle="People, roles and site access · every change is logged">
       <InviteForm />
+      <UndeliveredMail enabled={isAdmin} />
       <View style={{ flexDirection: isWide ? 'row' : 'column', gap: space.lg, alignItems: 'flex-start' }}>
         <View style={{ flex: isWide ? 3 : undefined, width: isWide ? undefined : '100%', gap: space.sm }}>
           <Text variant="title">{team.data ? `People (${team.data.total})` : 'People'}</Text>

@@ -8,7 +8,7 @@ import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { Text } from '@/components/ui/text';
 import { PrintLabelsButtons } from '@/components/labels/print-labels-buttons';
 import { errorMessage } from '@/hooks/api/request';
-import { useMeQuery } from '@/hooks/api/use-auth';
+import { usePermissions } from '@/hooks/auth/use-permissions';
 import { useReplaceLabelMutation, useRetiredLabelsQuery } from '@/hooks/api/use-labels';
 import { formatLabelCode, labelUrl } from '@/shared/rules/label-code';
 import type { Asset } from '@/shared/types/register';
@@ -18,11 +18,11 @@ const origin = () => (Platform.OS === 'web' && typeof window !== 'undefined' ? w
 
 /** The item's QR label on screen (for showing or scanning from another phone), printing and replacement. */
 export function AssetLabelCard({ asset }: { asset: Asset }) {
-  const me = useMeQuery();
+  const { may } = usePermissions();
   const replace = useReplaceLabelMutation(asset.id);
   const retired = useRetiredLabelsQuery(asset.id);
   const [confirming, setConfirming] = useState(false);
-  const canReplace = !!me.data && me.data.role !== 'viewer' && !asset.archived;
+  const canReplace = may('replaceLabel') && !asset.archived;
   return (
     <Card>
       <Text variant="title">Plant label</Text>

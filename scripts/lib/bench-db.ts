@@ -1,7 +1,8 @@
 // The board and the label lookup over HTTP, and the board's own SQL sent raw through the mariadb driver.
 import mariadb from 'mariadb';
 import type { Sequelize } from 'sequelize';
-import { getBoard, readBoardFilters } from '@/server/services/board.service';
+import { getBoard } from '@/server/services/board.service';
+import { boardQuery } from '@/shared/schemas/queries';
 import type { AuthUser } from '@/server/middleware/auth';
 
 export const percentile = (ms: number[], q: number) => {
@@ -36,7 +37,7 @@ export async function captureBoardSql(sequelize: Sequelize, actor: AuthUser): Pr
   const before = options.logging;
   options.logging = (sql: string) => { statements.push(sql.replace(/^Executing \([^)]*\): /, '').replace(/ - parameters:\[\]$/, '')); };
   try {
-    await getBoard(sequelize, actor, readBoardFilters({}), { page: 1, pageSize: 50, offset: 0 });
+    await getBoard(sequelize, actor, boardQuery.validateSync({}), { page: 1, pageSize: 50, offset: 0 });
   } finally {
     options.logging = before;
   }

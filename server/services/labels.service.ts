@@ -1,21 +1,23 @@
 import { Op, type Sequelize, type WhereOptions } from 'sequelize';
 import { clock } from '@/server/lib/clock';
-import { HttpError, forbidden, notFound } from '@/server/lib/http-error';
-import { renderLabelsPdf, type LabelLayout } from '@/server/lib/label-pdf';
+import { HttpError, notFound } from '@/server/lib/http-error';
+import { renderLabelsPdf } from '@/server/lib/label-pdf';
 import { insertWithLabelCode } from '@/server/lib/unique-clash';
-import type { AuthUser } from '@/server/middleware/auth';
+import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
 import { Asset } from '@/server/models/asset.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { RetiredLabel } from '@/server/models/retired-label.model';
 import { Site } from '@/server/models/site.model';
 import { labelUrl, normaliseLabelCode } from '@/shared/rules/label-code';
+import { siteWhere } from '@/server/services/site-access.service';
+import type { LabelLayout } from '@/shared/schemas/queries';
 
 export const MAX_LABELS_PER_PDF = 500;
 
 /** The id of the item a label code belongs to; a malformed, retired or foreign code is "no such label" (404). */
 export async function assetIdForLabel(actor: AuthUser, raw: string): Promise<number> {
   const code = normaliseLabelCode(raw);
-  const asset = code ? await Asset.findOne({ attributes: ['id'], where: { labelCode: code, organisationId: actor.organisationId } }) : null;
+  const asset = code ? await Asset.findOne({ attributes: ['id'], where: { labelCode: code, organisationId: actor.organisationId, ...siteWhere(actor) } }) : null;
   if (!asset) throw new HttpError(404, 'no-such-label', 'No such label.');
   return asset.id;
 }
@@ -25,7 +27,7 @@ export async function assetIdForLabel(actor: AuthUser, raw: string): Promise<num
  * refuses it twice) and stops opening the item. A clash with a live code is retried by the register's own mechanism.
  */
 export async function replaceLabel(sequelize: Sequelize, actor: AuthUser, assetId: number): Promise<{ labelCode: string; retiredCode: string }> {
-  if (actor.role === 'viewer') throw forbidden('Viewers cannot replace labels.');
+  ensurePermission(actor, 'replaceLabel', 'Viewers cannot replace labels.');
   return sequelize.transaction(async (transaction) => {
     const asset = Number.isSafeInteger(assetId)
       ? await Asset.findOne({ where: { id: assetId, organisationId: actor.organisationId }, transaction, lock: transaction.LOCK.UPDATE })
@@ -54,7 +56,7 @@ export interface LabelSelection {
 
 /** A PDF of labels for the chosen items (archived items excluded), ordered by site, plant room and plant ID. */
 export async function labelsPdf(actor: AuthUser, selection: LabelSelection, layout: LabelLayout, publicUrl: string): Promise<Buffer> {
-  const where: WhereOptions<Asset> = { organisationId: actor.organisationId, archivedAt: null };
+  const where: WhereOptions<Asset> = { organisationId: actor.organisationId, archivedAt: null, ...siteWhere(actor) };
   if (selection.assetIds?.length) Object.assign(where, { id: { [Op.in]: selection.assetIds } });
   else if (selection.plantRoomId) Object.assign(where, { plantRoomId: selection.plantRoomId });
   else if (selection.siteId) Object.assign(where, { siteId: selection.siteId });
