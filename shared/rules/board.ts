@@ -8,7 +8,7 @@ export const BOARD_STATES = ['overdue', 'due-soon', 'live'] as const;
 export type BoardState = (typeof BOARD_STATES)[number];
 
 export const BOARD_STATE_LABELS: Record<BoardState, string> = {
-  overdue: 'Overdue',
+  overdue: 'Past expiry',
   'due-soon': 'Due within 24 h',
   live: 'Live',
 };
