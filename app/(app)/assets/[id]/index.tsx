@@ -12,6 +12,7 @@ import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { AssetLabelCard } from '@/components/labels/asset-label-card';
+import { ConnectionsCard } from '@/components/connections/connections-card';
 import { AssetReadingsSection } from '@/components/readings/asset-readings-section';
 import { AssetDetails } from '@/components/register/asset-details';
 import { AssetStateSlot } from '@/components/register/asset-state-slot';
@@ -57,6 +58,7 @@ export default function AssetScreen() {
             {a.archived ? <Notice tone="info" word="Archived">This item is no longer in service. Its record is kept for history.</Notice> : null}
             <AssetStateSlot asset={a} />
             <AssetDetails asset={a} />
+            <ConnectionsCard asset={a} />
             <AssetReadingsSection asset={a} />
             <Card>
               <Text variant="title">Photos</Text>
