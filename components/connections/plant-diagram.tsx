@@ -9,7 +9,7 @@ import { DiagramLegend } from '@/components/connections/diagram-legend';
 import { layoutDiagram, type PlacedLink } from '@/components/connections/diagram-layout';
 import { DiagramNode } from '@/components/connections/diagram-node';
 import { MEDIUM_LINES } from '@/components/connections/connection-vocabulary';
-import { fitView, usePanZoom } from '@/components/connections/use-pan-zoom';
+import { fitView, startView, transformFor, usePanZoom } from '@/components/connections/use-pan-zoom';
 import type { PlantRoomDiagram } from '@/shared/types/connections';
 
 const ARROW = 9;
@@ -40,7 +40,7 @@ export function PlantDiagram({ diagram }: { diagram: PlantRoomDiagram }) {
   const [frame, setFrame] = useState({ w: 0, h: Math.max(360, Math.round(windowHeight * 0.62)) });
   const { view, setView, zoom, handlers } = usePanZoom({ x: 0, y: 0, k: 1 });
   const fit = () => setView(fitView(placed.width, placed.height, frame.w, frame.h));
-  useEffect(() => { if (frame.w) fit(); }, [frame.w, placed]); // eslint-disable-line react-hooks/exhaustive-deps
+  useEffect(() => { if (frame.w) setView(startView(placed.width, frame.w, frame.h)); }, [frame.w, placed]); // eslint-disable-line react-hooks/exhaustive-deps
 
   if (!diagram.connections.length) {
     return <Text muted>No connections are recorded for this room yet. Add them on each item’s record (“Supplied from”, “Supplies”).</Text>;
@@ -58,7 +58,7 @@ export function PlantDiagram({ diagram }: { diagram: PlantRoomDiagram }) {
         testID="plant-diagram"
         {...handlers}
       >
-        <View style={{ position: 'absolute', left: 0, top: 0, width: placed.width, height: placed.height, transformOrigin: 'top left', transform: [{ translateX: view.x }, { translateY: view.y }, { scale: view.k }] }}>
+        <View style={{ position: 'absolute', left: 0, top: 0, width: placed.width, height: placed.height, transform: transformFor(view, placed.width, placed.height) }}>
           <Svg width={placed.width} height={placed.height} style={StyleSheet.absoluteFill}>
             {placed.links.map((l) => <LinkLine key={l.id} link={l} />)}
           </Svg>

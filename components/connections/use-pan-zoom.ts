@@ -56,3 +56,18 @@ export function fitView(w: number, h: number, fw: number, fh: number): View2D {
   const k = clampK(Math.min(1, fw / Math.max(w, 1), fh / Math.max(h, 1)));
   return { k, x: (fw - w * k) / 2, y: (fh - h * k) / 2 };
 }
+
+/** Large rooms start readable rather than whole: at least this scale, top of the drawing, centred across. */
+const START_SCALE = 0.6;
+export function startView(w: number, fw: number, fh: number): View2D {
+  const k = Math.max(START_SCALE, fitView(w, 0, fw, fh).k);
+  return { k, x: (fw - w * k) / 2, y: 0 };
+}
+
+/**
+ * The style transform that draws point p of the drawing at (x + k·p): a view scales about its own centre, so the
+ * centre's shift is taken back in the translation.
+ */
+export function transformFor(v: View2D, w: number, h: number) {
+  return [{ translateX: v.x - (w / 2) * (1 - v.k) }, { translateY: v.y - (h / 2) * (1 - v.k) }, { scale: v.k }];
+}
