@@ -47,6 +47,9 @@ export function ConnectionsCard({ asset }: { asset: Asset }) {
       {perms.canAdd && !asset.archived ? (
         adding ? <AddConnectionForm asset={asset} /> : <Button title="Add a connection" variant="secondary" onPress={() => setAdding(true)} testID="connection-open-add" />
       ) : null}
+      {asset.plantRoomId && (links.data?.from.length || links.data?.to.length) ? (
+        <Button title="Show on the room diagram" variant="secondary" onPress={() => router.push({ pathname: '/plant-rooms/[id]/diagram', params: { id: asset.plantRoomId!, focus: asset.id } })} testID="show-on-diagram" />
+      ) : null}
       {!asset.archived ? <Button title="Plan an isolation" onPress={() => router.push(`/assets/${asset.id}/plan`)} testID="open-isolation-plan" /> : null}
     </Card>
   );

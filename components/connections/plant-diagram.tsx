@@ -6,7 +6,7 @@ import { colors, radius, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
 import { DiagramLegend } from '@/components/connections/diagram-legend';
-import { layoutDiagram, type PlacedLink } from '@/components/connections/diagram-layout';
+import { NODE_SIZE, layoutDiagram, type PlacedLink } from '@/components/connections/diagram-layout';
 import { DiagramNode } from '@/components/connections/diagram-node';
 import { MEDIUM_LINES } from '@/components/connections/connection-vocabulary';
 import { fitView, startView, transformFor, usePanZoom } from '@/components/connections/use-pan-zoom';
@@ -33,14 +33,16 @@ function LinkLine({ link }: { link: PlacedLink }) {
 }
 
 /** The room drawn from its connections: drag to pan, pinch or the buttons to zoom, tap an item to open it. */
-export function PlantDiagram({ diagram }: { diagram: PlantRoomDiagram }) {
+export function PlantDiagram({ diagram, focusId }: { diagram: PlantRoomDiagram; focusId?: number }) {
   const router = useRouter();
   const { height: windowHeight } = useWindowDimensions();
   const placed = useMemo(() => layoutDiagram(diagram), [diagram]);
   const [frame, setFrame] = useState({ w: 0, h: Math.max(360, Math.round(windowHeight * 0.62)) });
   const { view, setView, zoom, handlers } = usePanZoom({ x: 0, y: 0, k: 1 });
   const fit = () => setView(fitView(placed.width, placed.height, frame.w, frame.h));
-  useEffect(() => { if (frame.w) setView(startView(placed.width, frame.w, frame.h)); }, [frame.w, placed]); // eslint-disable-line react-hooks/exhaustive-deps
+  const focus = placed.items.find((p) => p.item.id === focusId);
+  const focusPoint = focus ? { x: focus.x + NODE_SIZE.width / 2, y: focus.y + NODE_SIZE.height / 2 } : undefined;
+  useEffect(() => { if (frame.w) setView(startView(placed.width, frame.w, frame.h, focusPoint)); }, [frame.w, placed, focusId]); // eslint-disable-line react-hooks/exhaustive-deps
 
   if (!diagram.connections.length) {
     return <Text muted>No connections are recorded for this room yet. Add them on each item’s record (“Supplied from”, “Supplies”).</Text>;

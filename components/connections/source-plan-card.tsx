@@ -18,9 +18,9 @@ const away = (d: number) => (d <= 1 ? 'next to the item' : `${d} links away`);
 function PointRow({ point, n }: { point: PlanPoint; n: number }) {
   return (
     <View style={{ gap: space.xs, paddingVertical: space.xs }} testID={`plan-point-${point.item.plantId}`}>
-      <View style={{ flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' }}>
+      <View style={{ flexDirection: 'row', alignItems: 'center', gap: space.sm }}>
         <Text bold>{`${n}.`}</Text>
-        <Link href={`/assets/${point.item.id}`} style={{ minHeight: 48, paddingVertical: space.sm }}>
+        <Link href={`/assets/${point.item.id}`} style={{ flex: 1, minHeight: 48, paddingVertical: space.sm }}>
           <Text bold style={{ color: colors.brand, textDecorationLine: 'underline' }}>{`${point.item.plantId} · ${point.item.name}`}</Text>
         </Link>
       </View>

@@ -57,9 +57,13 @@ export function fitView(w: number, h: number, fw: number, fh: number): View2D {
   return { k, x: (fw - w * k) / 2, y: (fh - h * k) / 2 };
 }
 
-/** Large rooms start readable rather than whole: at least this scale, top of the drawing, centred across. */
+/**
+ * Large rooms start readable rather than whole: at least this scale, with `focus` (a point of the drawing) in the
+ * middle of the frame, or else the top of the drawing centred across.
+ */
 const START_SCALE = 0.6;
-export function startView(w: number, fw: number, fh: number): View2D {
+export function startView(w: number, fw: number, fh: number, focus?: { x: number; y: number }): View2D {
+  if (focus) return { k: 1, x: fw / 2 - focus.x, y: fh / 2 - focus.y };
   const k = Math.max(START_SCALE, fitView(w, 0, fw, fh).k);
   return { k, x: (fw - w * k) / 2, y: 0 };
 }

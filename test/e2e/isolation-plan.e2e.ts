@@ -63,13 +63,20 @@ describe('isolation planner and plant-room diagram', () => {
   it('on a phone: the diagram pans and zooms, shows states in words, and a tap opens the item', async () => {
     const w = await signedIn(PHONE);
     const { page } = w;
-    await page.goto(`${baseUrl}/plant-rooms/${boiler.plantRoomId}`);
-    await page.getByTestId('room-diagram').click();
+    await page.goto(`${baseUrl}/assets/${boiler.id}`);
+    await page.getByTestId('show-on-diagram').click();
     await page.getByTestId('plant-diagram').waitFor();
     await page.getByTestId('diagram-item-B-02').waitFor();
+    // Opened from the boiler's record, the diagram starts with the boiler in the middle of the frame.
+    const box = (await page.getByTestId('plant-diagram').boundingBox())!;
+    const start = (await page.getByTestId('diagram-item-B-02').boundingBox())!;
+    expect(Math.abs(start.x + start.width / 2 - (box.x + box.width / 2))).toBeLessThan(2);
     await expect(page.getByTestId('diagram-item-B-02').getAttribute('aria-label')).resolves.toMatch(/B-02 Boiler 2: Normal/);
-    await screenshot(page, 'diagram-fit-phone');
-    const before = await page.getByTestId('diagram-item-B-02').boundingBox();
+    await screenshot(page, 'diagram-focus-phone');
+    await page.getByTestId('diagram-zoom-out').click();
+    await page.getByTestId('diagram-zoom-out').click();
+    await screenshot(page, 'diagram-zoomed-out-phone');
+    const before = (await page.getByTestId('diagram-item-B-02').boundingBox())!;
     await page.getByTestId('diagram-zoom-in').click();
     await page.getByTestId('diagram-zoom-in').click();
     const zoomed = await page.getByTestId('diagram-item-B-02').boundingBox();
@@ -84,7 +91,7 @@ describe('isolation planner and plant-room diagram', () => {
     expect(dragged!.x - zoomed!.x).toBeLessThan(-60);
     expect(dragged!.y - zoomed!.y).toBeGreaterThan(40);
     await screenshot(page, 'diagram-zoomed-phone');
-    await page.getByTestId('diagram-fit').click();
+    await page.getByTestId('diagram-zoom-in').click();
     await page.getByTestId('diagram-item-B-02').click();
     await page.waitForURL(`${baseUrl}/assets/${boiler.id}`);
     clean(w);

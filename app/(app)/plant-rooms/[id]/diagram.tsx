@@ -10,7 +10,8 @@ import { usePlantRoomDiagramQuery } from '@/hooks/api/use-connections';
 import { usePlantRoomQuery } from '@/hooks/api/use-plant-rooms';
 
 export default function PlantRoomDiagramScreen() {
-  const id = Number(useLocalSearchParams<{ id: string }>().id);
+  const params = useLocalSearchParams<{ id: string; focus?: string }>();
+  const id = Number(params.id);
   const room = usePlantRoomQuery(id);
   const diagram = usePlantRoomDiagramQuery(id);
   return (
@@ -19,7 +20,7 @@ export default function PlantRoomDiagramScreen() {
         <Screen title={`Diagram: ${r.name}`} subtitle={r.siteName}>
           <Breadcrumbs trail={[{ label: r.siteName, href: `/sites/${r.siteId}` }, { label: r.name, href: `/plant-rooms/${id}` }]} />
           <Notice tone="caution" word="Drawn from the register">Pipework and cables on site may differ from what is recorded. Check labels and flow arrows on site before relying on it.</Notice>
-          {diagram.data ? <PlantDiagram diagram={diagram.data} /> : diagram.isError ? <Notice tone="danger" word="Cannot load">{errorMessage(diagram.error)}</Notice> : <LoadingView />}
+          {diagram.data ? <PlantDiagram diagram={diagram.data} focusId={Number(params.focus) || undefined} /> : diagram.isError ? <Notice tone="danger" word="Cannot load">{errorMessage(diagram.error)}</Notice> : <LoadingView />}
         </Screen>
       )}
     </QueryScreen>
