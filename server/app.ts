@@ -19,6 +19,7 @@ import { tagsRoutes } from '@/server/routes/tags.routes';
 import { usersRoutes } from '@/server/routes/users.routes';
 import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import type { PhotoStorage } from '@/server/lib/photo-storage';
+import type { LauncherStatus } from '@/server/services/health.service';
 import { assetsRoutes } from '@/server/routes/assets.routes';
 import { photosRoutes } from '@/server/routes/photos.routes';
 import { plantRoomsRoutes } from '@/server/routes/plant-rooms.routes';
@@ -36,6 +37,8 @@ export interface AppContext {
   config: ServerConfig;
   /** Photo files; made from config.storage when not given. */
   storage?: PhotoStorage;
+  /** The state of the private mariadbd when this process launched it, for /api/health. */
+  launcher?: () => LauncherStatus;
   /** Where request lines go; by default the server's logger (none under NODE_ENV=test). */
   requestLog?: Logger;
 }

@@ -1,5 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { request } from '@/hooks/api/request';
+import { sendOrQueue } from '@/hooks/offline/send-or-queue';
 import type { ReadingCorrectionInput, ReadingSetInput } from '@/shared/schemas/readings';
 import type { ReadingList, ReadingSet } from '@/shared/types/readings';
 
@@ -24,7 +25,9 @@ export function useReadingsQuery(assetId: number) {
 export function useLogReadingsMutation(assetId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: ReadingSetInput) => request<ReadingSet>(`/assets/${assetId}/readings`, { method: 'POST', body: input }),
+    // With no signal the set waits in the outbox; its key stops a repeat from logging it twice.
+    mutationFn: (input: ReadingSetInput) =>
+      sendOrQueue<ReadingSet>(`/assets/${assetId}/readings`, { method: 'POST', body: input }, { kind: 'reading', summary: 'log readings', assetId }),
     onSuccess: () => qc.invalidateQueries({ queryKey: readingKeys.asset(assetId) }),
   });
 }

@@ -3,6 +3,8 @@ import type { ImagePickerAsset } from 'expo-image-picker';
 import { photoFormData } from '@/hooks/api/use-photos';
 import { RequestError, request } from '@/hooks/api/request';
 import { assetKeys } from '@/hooks/api/use-assets';
+import { sendOrQueue } from '@/hooks/offline/send-or-queue';
+import type { OutboxKind } from '@/hooks/offline/outbox-types';
 import type { TagStatus } from '@/shared/rules/tags';
 import type { ClearInAbsenceInput, ClearTagInput, ExtendTagInput, HandoverInput, RaiseTagInput } from '@/shared/schemas/tags';
 import type { Tag } from '@/shared/types/tags';
@@ -66,34 +68,41 @@ export interface RaiseTagVariables {
 export function useRaiseTagMutation(assetId: number) {
   const changed = useTagChanged();
   return useMutation({
+    // With no signal the raise waits in the outbox with the same key; the server answers a repeat with the tag it already made.
     mutationFn: ({ input, idempotencyKey }: RaiseTagVariables) =>
-      request<Tag>(`/assets/${assetId}/tags`, { method: 'POST', body: input, headers: { 'Idempotency-Key': idempotencyKey } }),
-    // A lost connection is retried with the same key; the server answers a repeat with the tag it already made.
-    retry: (count, err) => err instanceof RequestError && err.status === 0 && count < 2,
+      sendOrQueue<Tag>(`/assets/${assetId}/tags`, { method: 'POST', body: input, headers: { 'Idempotency-Key': idempotencyKey } }, {
+        kind: 'raise-tag',
+        summary: `raise ${input.kind} tag: ${input.reason}`,
+        assetId,
+      }),
+    // A dropped connection is tried again with the same key before the raise goes to the outbox.
+    retry: (count, err) => err instanceof RequestError && err.status === 0 && err.code !== 'queued' && count < 2,
     onSuccess: changed,
   });
 }
 
-function useTagAction<I>(id: number, action: string) {
+/** A tag action; with no signal it waits in the outbox and the form is told it has not happened yet. */
+function useTagAction<I>(id: number, action: string, kind: OutboxKind, summary: string) {
   const changed = useTagChanged();
   return useMutation({
-    mutationFn: (input: I) => request<Tag>(`/tags/${id}/${action}`, { method: 'POST', body: input }),
+    mutationFn: (input: I) => sendOrQueue<Tag>(`/tags/${id}/${action}`, { method: 'POST', body: input }, { kind, summary: `${summary} (tag ${id})`, tagId: id }),
     onSuccess: changed,
   });
 }
 
-export const useClearTagMutation = (id: number) => useTagAction<ClearTagInput>(id, 'clear');
-export const useClearInAbsenceMutation = (id: number) => useTagAction<ClearInAbsenceInput>(id, 'clear-in-absence');
-export const useExtendTagMutation = (id: number) => useTagAction<ExtendTagInput>(id, 'extend');
+export const useClearTagMutation = (id: number) => useTagAction<ClearTagInput>(id, 'clear', 'tag-clear', 'clear the tag');
+export const useClearInAbsenceMutation = (id: number) => useTagAction<ClearInAbsenceInput>(id, 'clear-in-absence', 'tag-clear', 'clear the tag in the holder’s absence');
+export const useExtendTagMutation = (id: number) => useTagAction<ExtendTagInput>(id, 'extend', 'tag-extend', 'extend the tag');
 /** Called by the on-coming person: they become the holder. */
-export const useHandoverTagMutation = (id: number) => useTagAction<HandoverInput>(id, 'handover');
-export const useAddTagNoteMutation = (id: number) => useTagAction<{ text: string }>(id, 'notes');
+export const useHandoverTagMutation = (id: number) => useTagAction<HandoverInput>(id, 'handover', 'tag-handover', 'take over the tag');
+export const useAddTagNoteMutation = (id: number) => useTagAction<{ text: string }>(id, 'notes', 'tag-note', 'add a note');
 
 /** A photo of the lock or tag in place, added to a live tag. */
 export function useAddTagPhotoMutation(id: number) {
   const changed = useTagChanged();
   return useMutation({
-    mutationFn: (asset: ImagePickerAsset) => request<Tag>(`/tags/${id}/photos`, { method: 'POST', body: photoFormData(asset) }),
+    mutationFn: (asset: ImagePickerAsset) =>
+      sendOrQueue<Tag>(`/tags/${id}/photos`, { method: 'POST', body: photoFormData(asset) }, { kind: 'tag-photo', summary: `add a photo (tag ${id})`, tagId: id }),
     onSuccess: changed,
   });
 }

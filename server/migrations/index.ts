@@ -8,6 +8,7 @@ import { notifications } from './0006-notifications';
 import { tagPhotos } from './0007-tag-photos';
 import { connections } from './0010-connections';
 import { visits } from './0011-visits';
+import { readingIdempotency } from './0014-reading-idempotency';
 
 export interface Migration {
   name: string;
@@ -16,4 +17,4 @@ export interface Migration {
 }
 
 /** Every migration, in order. A new migration is a new file here, never an edit to an applied one. */
-export const migrations: Migration[] = [foundation, register, readings, tags, labels, notifications, tagPhotos, connections, visits];
+export const migrations: Migration[] = [foundation, register, readings, tags, labels, notifications, tagPhotos, connections, visits, readingIdempotency];

@@ -25,6 +25,8 @@ export class Reading extends Model<InferAttributes<Reading>, InferCreationAttrib
   declare supersedesId: number | null;
   declare correctionReason: string | null;
   declare createdBy: number;
+  /** The client's Idempotency-Key, so a set sent twice (an outbox retry) is stored once. */
+  declare idempotencyKey: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare asset?: NonAttribute<Asset>;
   declare creator?: NonAttribute<User>;
@@ -55,6 +57,7 @@ export class Reading extends Model<InferAttributes<Reading>, InferCreationAttrib
         supersedesId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         correctionReason: { type: DataTypes.STRING(500), allowNull: true },
         createdBy: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        idempotencyKey: { type: DataTypes.STRING(100), allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'readings', underscored: true, updatedAt: false },

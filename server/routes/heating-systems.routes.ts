@@ -1,9 +1,8 @@
 import { Router } from 'express';
 import type { AppContext } from '@/server/app';
-import { auth, currentUser, requireRole } from '@/server/middleware/auth';
-import { validate } from '@/server/middleware/validate';
+import { auth, currentUser, requirePermission } from '@/server/middleware/auth';
+import { parseId, validate } from '@/server/middleware/validate';
 import { getSystem, listSystems, parseSystemName, saveSystem, systemExpansionCheck } from '@/server/services/heating-systems.service';
-import { parseId } from '@/server/services/register-access';
 import { heatingSystemSchema } from '@/shared/schemas/readings';
 
 /** Design values per heating system (site + the `system` text on its items) and the vessel check. */
@@ -18,7 +17,7 @@ export function heatingSystemsRoutes({ config }: AppContext) {
     res.json(await getSystem(currentUser(req), parseId(req.params.id), parseSystemName(req.params.name)));
   });
   // Engineers read the valve and unit on site, so they may record the values as well as supervisors.
-  router.put('/sites/:id/systems/:name', authed, requireRole('admin', 'supervisor', 'engineer'), validate(heatingSystemSchema), async (req, res) => {
+  router.put('/sites/:id/systems/:name', authed, requirePermission('recordReadings'), validate(heatingSystemSchema), async (req, res) => {
     res.json(await saveSystem(currentUser(req), parseId(req.params.id), parseSystemName(req.params.name), req.body));
   });
   router.get('/sites/:id/systems/:name/expansion-check', authed, async (req, res) => {

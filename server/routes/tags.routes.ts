@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import type { AppContext } from '@/server/app';
 import { auth, currentUser } from '@/server/middleware/auth';
-import { validate } from '@/server/middleware/validate';
+import { parseId, validate } from '@/server/middleware/validate';
 import { addTagNote, clearInAbsence, clearTag, extendTag, handOverTag } from '@/server/services/tag-actions.service';
 import { addTagPhoto, getTag, listTags, raiseTag } from '@/server/services/tags.service';
 import { MAX_PHOTO_BYTES } from '@/server/lib/photo-processing';
@@ -12,7 +12,7 @@ import { clearInAbsenceSchema, clearTagSchema, extendTagSchema, handoverSchema, 
 export function tagsRoutes({ config, sequelize, storage }: AppContext) {
   const router = Router();
   const authed = auth(config.jwtSecret);
-  const id = (raw: unknown) => Number(raw);
+  const id = parseId;
 
   router.post('/assets/:id/tags', authed, validate(raiseTagSchema), async (req, res) => {
     const key = req.get('idempotency-key')?.slice(0, 100) || null;

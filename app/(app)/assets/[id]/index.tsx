@@ -13,6 +13,7 @@ import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { AssetLabelCard } from '@/components/labels/asset-label-card';
 import { ConnectionsCard } from '@/components/connections/connections-card';
+import { ItemOffline } from '@/components/offline/pending-actions';
 import { AssetReadingsSection } from '@/components/readings/asset-readings-section';
 import { AssetDetails } from '@/components/register/asset-details';
 import { AssetStateSlot } from '@/components/register/asset-state-slot';
@@ -22,6 +23,8 @@ import { ASSET_TYPE_ICONS } from '@/components/register/register-vocabulary';
 import { errorMessage } from '@/hooks/api/request';
 import { useAddAssetPhotoMutation, useArchiveAssetMutation, useAssetQuery } from '@/hooks/api/use-assets';
 import { usePermissions } from '@/hooks/auth/use-permissions';
+import { useNow } from '@/components/tags/use-now';
+import { VisitBanner } from '@/components/visits/visit-banner';
 import { ASSET_TYPE_LABELS } from '@/shared/rules/register';
 
 export default function AssetScreen() {
@@ -32,6 +35,7 @@ export default function AssetScreen() {
   const addPhoto = useAddAssetPhotoMutation(id);
   const archive = useArchiveAssetMutation();
   const [confirming, setConfirming] = useState(false);
+  const now = useNow();
   return (
     <QueryScreen query={asset} title="Plant item">
       {(a) => {
@@ -57,6 +61,8 @@ export default function AssetScreen() {
             </View>
             {a.archived ? <Notice tone="info" word="Archived">This item is no longer in service. Its record is kept for history.</Notice> : null}
             <AssetStateSlot asset={a} />
+            <ItemOffline asset={a} />
+            {a.archived ? null : <VisitBanner siteId={a.siteId} siteName={a.siteName} next={`/assets/${id}`} now={now} />}
             <AssetDetails asset={a} />
             <ConnectionsCard asset={a} />
             <AssetReadingsSection asset={a} />
