@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { request } from '@/hooks/api/request';
+import { fetchBlob, request } from '@/hooks/api/request';
 import type { EnergySource } from '@/shared/rules/register';
 import type { ConnectionInput } from '@/shared/schemas/connections';
 import type { AssetConnections, ClosingAffects, Connection, IsolationPlan, PlantRoomDiagram } from '@/shared/types/connections';
@@ -45,4 +45,9 @@ export function useDeleteConnectionMutation() {
     mutationFn: (id: number) => request<void>(`/connections/${id}`, { method: 'DELETE' }),
     onSuccess: () => qc.invalidateQueries({ queryKey: connectionKeys.all }),
   });
+}
+
+/** One site's connections as CSV (site, from, to, medium), fetched with the token. */
+export function useExportConnectionsMutation() {
+  return useMutation({ mutationFn: (siteId: number) => fetchBlob(`/api/connections/export.csv?siteId=${siteId}`) });
 }
