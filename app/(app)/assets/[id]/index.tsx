@@ -12,6 +12,7 @@ import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { lazyPart } from '@/components/ui/lazy-part';
+import { ConnectionsCard } from '@/components/connections/connections-card';
 import { ItemOffline } from '@/components/offline/pending-actions';
 import { AssetReadingsSection } from '@/components/readings/asset-readings-section';
 import { AssetDetails } from '@/components/register/asset-details';
@@ -65,6 +66,7 @@ export default function AssetScreen() {
             <ItemOffline asset={a} />
             {a.archived ? null : <VisitBanner siteId={a.siteId} siteName={a.siteName} next={`/assets/${id}`} now={now} />}
             <AssetDetails asset={a} />
+            <ConnectionsCard asset={a} />
             <AssetReadingsSection asset={a} />
             <Card>
               <Text variant="title">Photos</Text>
