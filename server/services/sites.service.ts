@@ -10,6 +10,7 @@ import type { SiteInput } from '@/shared/schemas/register';
 import { isValidTimeZone } from '@/shared/rules/time-zone';
 import type { Site as SiteDto } from '@/shared/types/register';
 import type { ListResponse } from '@/shared/types/api';
+import { siteWhere } from '@/server/services/site-access.service';
 
 type Paging = { page: number; pageSize: number; offset: number };
 
@@ -45,7 +46,7 @@ async function dto(site: Site) {
 
 export async function listSites(actor: AuthUser, paging: Paging): Promise<ListResponse<SiteDto>> {
   const { rows, count } = await Site.findAndCountAll({
-    where: { organisationId: actor.organisationId },
+    where: { organisationId: actor.organisationId, ...siteWhere(actor, 'id') },
     order: [['name', 'ASC'], ['id', 'ASC']],
     limit: paging.pageSize,
     offset: paging.offset,

@@ -1,5 +1,5 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeEach, beforeAll, describe, expect, it } from 'vitest';
 import { Asset } from '@/server/models/asset.model';
 import { Reading } from '@/server/models/reading.model';
 import { Site } from '@/server/models/site.model';
@@ -8,7 +8,7 @@ import { barToPa, litresPerSecondToM3PerS, SAFETY_VALVE_DANGER_TEXT } from '@/sh
 import { generateLabelCode } from '@/shared/rules/label-code';
 import type { AssetType } from '@/shared/rules/register';
 import type { ReadingSet } from '@/shared/types/readings';
-import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
+import { createOrganisation, giveViewerEverySite, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
 
 let t: TestApp;
 let u: OrgUsers;
@@ -51,6 +51,8 @@ beforeAll(async () => {
   tok.birch = await tokenFor(t.app, birch.engineer);
 });
 afterAll(() => t.close());
+// The viewer here stands for any reader: it is given every site (site limits are tested in test/server/services/site-access.test.ts).
+beforeEach(() => giveViewerEverySite(u.viewer));
 
 const as = (who: string) => ({
   get: (path: string) => request(t.app).get(path).set('Authorization', `Bearer ${tok[who]}`),
@@ -66,7 +68,8 @@ describe('GET /api/assets/:id/readings', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ items: [], total: 0, page: 1 });
     expect(res.body.checkSettings.systemName).toBe('LTHW 1');
-    expect(res.body.checkSettings.settings).toEqual({ flowSetpointC: 80, fillPressureGaugePa: barToPa(1) });
+    expect(res.body.checkSettings.settings).toEqual({ flowSetpointC: 80, fillPressureGaugePa: barToPa(1), vesselPreChargeGaugePa: barToPa(0.8) });
+    expect(res.body.checkSettings.sources.vesselPreChargeGaugePa).toMatch(/Lowest vessel pre-charge/);
     expect(res.body.checkSettings.sources.fillPressureGaugePa).toBe('Pressurisation unit PU-01 in the register');
   });
 
@@ -197,7 +200,8 @@ describe('POST /api/readings/:id/correct', () => {
   });
 
   it('appends a correction that supersedes the original, keeping the original visible and unchanged', async () => {
-    expect(original.flags.map((f) => f.level)).toEqual(['danger']);
+    // EN 12828 Annex D: 2.9 bar lies between p_e = 3 − 0.5 = 2.5 bar and the 3 bar safety valve → caution
+    expect(original.flags.map((f) => f.level)).toEqual(['caution']);
     const res = await as('engineer').post(`/api/readings/${original.id}/correct`, { systemPressureGaugePa: barToPa(1.9), reason: 'Read the wrong gauge' });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ supersedesId: original.id, correctionReason: 'Read the wrong gauge', takenAt: original.takenAt, flags: [] });
@@ -235,7 +239,8 @@ describe('GET /api/sites/:id/systems/:name/expansion-check', () => {
     expect(res.body.result.requiredNominalVolumeL).toBeCloseTo(35.7, 0);
     expect(res.body.result.installedNominalVolumeL).toBe(75);
     expect(res.body.result.verdict).toBe('pass');
-    expect(res.body.settings.preChargeMarginBar).toBe(0.3);
+    // EN 12828 Annex D: the standard's own 0.2 bar margin is the default
+    expect(res.body.settings.preChargeMarginBar).toBe(0.2);
   });
 
   it('says what is missing instead of guessing, and hides other organisations’ sites', async () => {

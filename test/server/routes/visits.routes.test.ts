@@ -3,13 +3,13 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { Visit } from '@/server/models/visit.model';
 import { VisitDecision } from '@/server/models/visit-decision.model';
 import { TagEvent } from '@/server/models/tag-event.model';
 import { Tag } from '@/server/models/tag.model';
-import { createOrganisation, tokenFor, type OrgUsers } from '@/test/setup/app';
+import { createOrganisation, giveViewerEverySite, tokenFor, type OrgUsers } from '@/test/setup/app';
 import { createSiteWithAssets } from '@/test/setup/register-fixtures';
 import { outboxRows, setupMailTestApp } from '@/test/server/support/mail-test-app';
 
@@ -33,6 +33,8 @@ beforeAll(async () => {
   tok.larch = await tokenFor(env.t.app, other.users.supervisor);
 });
 afterAll(() => env.close());
+// The viewer here stands for any reader: it is given every site (site limits are tested in test/server/services/site-access.test.ts).
+beforeEach(() => giveViewerEverySite(u.viewer));
 
 const as = (who: string) => ({
   get: (p: string) => request(env.t.app).get(p).set('Authorization', `Bearer ${tok[who]}`),
