@@ -56,6 +56,25 @@ describe('isolation planner and plant-room diagram', () => {
     await page.getByTestId('raise-from-plan').click();
     await page.getByTestId('raise-tag-form').waitFor();
     expect(new URL(page.url()).searchParams.get('assetId')).toBe(String(boiler.id));
+    await page.getByTestId('raise-reason').fill('Replace the burner flame sensor on boiler 2');
+    await page.getByTestId('raise-next').click();
+    // The plan's sources are ticked and its points filled in, nearest first, each one still changeable.
+    for (const s of ['gas', 'electrical', 'hot-water']) await expect(page.getByTestId(`source-${s}`).getAttribute('aria-checked')).resolves.toBe('true');
+    const planned = ['GV-B02', 'FS-B02', 'FV-B02', 'RV-B02'];
+    for (const [i, plantId] of planned.entries()) {
+      await expect(text(page, `point-${i}-chosen`)).resolves.toContain(plantId);
+      await page.getByTestId(`point-${i}-change`).waitFor();
+    }
+    await page.getByTestId('raise-lock-number').fill('L-202');
+    await screenshot(page, 'plan-raise-points-phone');
+    await page.getByTestId('raise-next').click();
+    await page.getByTestId('raise-contact-phone').fill('+44 7700 900103');
+    await page.getByTestId('raise-next').click();
+    await page.getByTestId('raise-submit').click();
+    await page.getByTestId('tag-header').waitFor();
+    const points = await text(page, 'tag-points');
+    for (const plantId of planned) expect(points).toContain(plantId);
+    await screenshot(page, 'plan-raised-tag-phone');
     clean(w);
     await w.context.close();
   });
