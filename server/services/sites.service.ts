@@ -16,7 +16,7 @@ type Paging = { page: number; pageSize: number; offset: number };
 
 /** The zone as the IANA database spells it (`europe/london` → `Europe/London`), or a 422 naming the field. */
 function canonicalZone(timeZone: string): string {
-  if (!isValidTimeZone(timeZone)) throw unprocessable('Some fields need attention.', { timeZone: 'Unknown time zone; use an IANA name such as Europe/London.' });
+  if (!isValidTimeZone(timeZone)) throw unprocessable('Some fields need attention.', { timeZone: 'Unknown time zone; give a region and city such as Europe/London.' });
   return new Intl.DateTimeFormat('en-GB', { timeZone }).resolvedOptions().timeZone;
 }
 
