@@ -81,7 +81,7 @@ describe('runDigests', () => {
     expect(await env.worker.runOnce()).toEqual({ sent: 2, failed: 0 });
     const [mail] = await env.inbox.to(u.supervisor.email);
     expect((await env.inbox.to(u.supervisor.email)).length).toBe(1);
-    expect(mail.subject).toBe('Tags for 2025-01-15: 1 overdue, 1 due today');
+    expect(mail.subject).toBe('Tags for 2025-01-15: 1 past expiry, 1 due today');
     expect(mail.text).toContain(`${TEST_PUBLIC_URL}/tags/${ids.overdue}`);
     expect(mail.text).toContain(`${TEST_PUBLIC_URL}/tags/${ids.dueToday}`);
     expect(mail.text).not.toContain(`/tags/${ids.tomorrow}`);
@@ -100,7 +100,7 @@ describe('runDigests', () => {
     await env.worker.runOnce();
     const mails = await env.inbox.to(u.admin.email);
     expect(mails).toHaveLength(1);
-    expect(mails[0].subject).toBe('Tags for 2025-01-16: 0 overdue, 1 due today');
+    expect(mails[0].subject).toBe('Tags for 2025-01-16: 0 past expiry, 1 due today');
     expect(mails[0].text).toContain(`${TEST_PUBLIC_URL}/tags/${ids.tokyoToday}`);
     expect(mails[0].text).toContain('Asia/Tokyo');
     expect(mails[0].text).not.toContain(`/tags/${ids.overdue}`);
