@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import type { AppContext } from '@/server/app';
+import { attemptLimiter } from '@/server/middleware/attempt-limits';
 import { auth, currentUser, requirePermission } from '@/server/middleware/auth';
 import { pathId, validate } from '@/server/middleware/validate';
 import { undeliveredMail } from '@/server/mail/outbox';
@@ -18,7 +19,9 @@ import { changeUserSchema, inviteUserSchema, siteAccessSchema } from '@/shared/s
 export function teamRoutes({ sequelize, config }: AppContext) {
   const router = Router();
   const admin = [auth(config.jwtSecret), requirePermission('administerTeam')];
-  router.post('/users/invite', ...admin, validate({ body: inviteUserSchema }), async (req, res) => {
+  // Refused invitations count against the admin, so addresses cannot be tried by the thousand.
+  const inviteLimit = attemptLimiter(config, 'invite', (req) => `user:${req.user?.id ?? ''}`);
+  router.post('/users/invite', ...admin, inviteLimit, validate({ body: inviteUserSchema }), async (req, res) => {
     res.status(201).json(await inviteUser(sequelize, currentUser(req), req.body, req.ip ?? null));
   });
   router.post('/users/:id/invite', ...admin, validate({ params: idParams }), async (req, res) => {
