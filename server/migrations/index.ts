@@ -6,6 +6,7 @@ import { tags } from './0004-tags';
 import { labels } from './0005-labels';
 import { notifications } from './0006-notifications';
 import { tagPhotos } from './0007-tag-photos';
+import { tagRules } from './0008-tag-rules';
 
 export interface Migration {
   name: string;
@@ -14,4 +15,4 @@ export interface Migration {
 }
 
 /** Every migration, in order. A new migration is a new file here, never an edit to an applied one. */
-export const migrations: Migration[] = [foundation, register, readings, tags, labels, notifications, tagPhotos];
+export const migrations: Migration[] = [foundation, register, readings, tags, labels, notifications, tagPhotos, tagRules];
