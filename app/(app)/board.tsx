@@ -39,12 +39,12 @@ export default function BoardScreen() {
     q: q || undefined,
     siteId: filters.siteId ?? undefined,
     kind: filters.kind ?? undefined,
-    authorId: filters.authorId ?? undefined,
+    holderId: filters.holderId ?? undefined,
     state: filters.state ?? undefined,
     sort: `${sort.dir === 'desc' ? '-' : ''}${sort.key}`,
     page: isWide ? page : 1,
     pageSize: isWide ? TABLE_PAGE : phoneCount,
-  }), [q, filters.siteId, filters.kind, filters.authorId, filters.state, sort, page, phoneCount, isWide]);
+  }), [q, filters.siteId, filters.kind, filters.holderId, filters.state, sort, page, phoneCount, isWide]);
   const board = useBoardQuery(query);
   const sites = useSitesQuery();
   const holders = useBoardHolders(board.data?.items ?? []);

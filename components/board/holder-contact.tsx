@@ -10,11 +10,11 @@ export function HolderContact({ row }: { row: BoardRow }) {
   const phone = row.contactPhone.trim();
   return (
     <View style={{ gap: 2 }}>
-      <Text variant="small" bold numberOfLines={2}>{row.author.name}</Text>
+      <Text variant="small" bold numberOfLines={2}>{row.holder.name}</Text>
       {phone ? (
         <Pressable
           accessibilityRole="link"
-          accessibilityLabel={`Call ${row.author.name} on ${phone}`}
+          accessibilityLabel={`Call ${row.holder.name} on ${phone}`}
           // A call must not also open the tag behind it.
           onPress={(e) => { e.stopPropagation?.(); void Linking.openURL(telHref(phone)); }}
           style={styles.call}

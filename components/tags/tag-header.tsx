@@ -61,10 +61,10 @@ export function TagHeader({ tag, now }: { tag: Tag; now: Date }) {
           <Text variant="small" muted>{[tag.asset.siteName, tag.asset.plantRoomName].filter(Boolean).join(' · ')}</Text>
         </Line>
         <Line wide={isWide} icon="account-hard-hat" label={tag.status === 'live' ? 'Held by' : 'Was held by'}>
-          <Text bold testID="tag-holder">{tag.author.name}</Text>
+          <Text bold testID="tag-holder">{tag.holder.name}</Text>
           {tag.contactPhone && tag.status === 'live' ? (
             <Link href={telHref(tag.contactPhone) as never} asChild>
-              <Pressable accessibilityRole="link" accessibilityLabel={`Call ${tag.author.name} on ${tag.contactPhone}`} style={StyleSheet.flatten([styles.link, styles.call])} testID="tag-call">
+              <Pressable accessibilityRole="link" accessibilityLabel={`Call ${tag.holder.name} on ${tag.contactPhone}`} style={StyleSheet.flatten([styles.link, styles.call])} testID="tag-call">
                 <MaterialCommunityIcons name="phone" size={20} color={colors.brand} />
                 <Text bold style={styles.linkText}>{`Call ${tag.contactPhone}`}</Text>
               </Pressable>

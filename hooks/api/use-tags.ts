@@ -4,14 +4,18 @@ import { photoFormData } from '@/hooks/api/use-photos';
 import { RequestError, request } from '@/hooks/api/request';
 import { assetKeys } from '@/hooks/api/use-assets';
 import type { TagStatus } from '@/shared/rules/tags';
-import type { ClearInAbsenceInput, ClearTagInput, ExtendTagInput, HandoverInput, RaiseTagInput } from '@/shared/schemas/tags';
-import type { Tag } from '@/shared/types/tags';
+import type {
+  ClearInAbsenceInput, ClearTagInput, ExtendTagInput, HandoverAcceptInput, HandoverOfferInput, ProofInput, RaiseTagInput, ReassignInAbsenceInput,
+} from '@/shared/schemas/tags';
+import type { Tag, TagNotice } from '@/shared/types/tags';
 import type { ListResponse } from '@/shared/types/user';
 
 export interface TagFilters {
   assetId?: number;
   siteId?: number;
   status?: TagStatus;
+  /** 'me': live tags a colleague has offered to the caller. */
+  offeredTo?: 'me';
 }
 
 export const tagKeys = {
@@ -19,6 +23,8 @@ export const tagKeys = {
   lists: () => [...tagKeys.all, 'list'] as const,
   list: (filters: TagFilters) => [...tagKeys.lists(), filters] as const,
   detail: (id: number) => [...tagKeys.all, 'detail', id] as const,
+  notices: () => [...tagKeys.all, 'notices'] as const,
+  colleagues: () => [...tagKeys.all, 'colleagues'] as const,
 };
 
 // An item carries tens of tags over its life, not hundreds: one page of the largest size holds its history.
@@ -51,12 +57,24 @@ function useTagChanged() {
   };
 }
 
-/** A key for one raise: sent with every attempt of the same submission so a retry never makes a second tag. */
-export function newIdempotencyKey(): string {
+/**
+ * A key for one submission of a tag action, sent as the `Idempotency-Key` header with every attempt of it, so a
+ * retry never writes a second tag or event; the server refuses the same key with a different request (422).
+ */
+export function newIdempotencyKey(action = 'raise'): string {
   const uuid = globalThis.crypto?.randomUUID?.();
-  if (uuid) return `raise-${uuid}`;
-  return `raise-${Date.now().toString(36)}-${Math.random().toString(36).slice(2)}${Math.random().toString(36).slice(2)}`;
+  if (uuid) return `${action}-${uuid}`;
+  return `${action}-${Date.now().toString(36)}-${Math.random().toString(36).slice(2)}${Math.random().toString(36).slice(2)}`;
 }
+
+/** One key per submitted variables object: react-query passes the same object to every retry of a mutation. */
+const submissionKeys = new WeakMap<object, string>();
+function keyFor(variables: object, action: string): string {
+  let key = submissionKeys.get(variables);
+  if (!key) submissionKeys.set(variables, (key = newIdempotencyKey(action)));
+  return key;
+}
+const retryLostConnection = (count: number, err: unknown) => err instanceof RequestError && err.status === 0 && count < 2;
 
 export interface RaiseTagVariables {
   input: RaiseTagInput;
@@ -69,31 +87,53 @@ export function useRaiseTagMutation(assetId: number) {
     mutationFn: ({ input, idempotencyKey }: RaiseTagVariables) =>
       request<Tag>(`/assets/${assetId}/tags`, { method: 'POST', body: input, headers: { 'Idempotency-Key': idempotencyKey } }),
     // A lost connection is retried with the same key; the server answers a repeat with the tag it already made.
-    retry: (count, err) => err instanceof RequestError && err.status === 0 && count < 2,
+    retry: retryLostConnection,
     onSuccess: changed,
   });
 }
 
-function useTagAction<I>(id: number, action: string) {
+function useTagAction<I extends object>(id: number, action: string) {
   const changed = useTagChanged();
+  const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: I) => request<Tag>(`/tags/${id}/${action}`, { method: 'POST', body: input }),
-    onSuccess: changed,
+    mutationFn: (input: I) => request<Tag>(`/tags/${id}/${action}`, { method: 'POST', body: input, headers: { 'Idempotency-Key': keyFor(input, action.replace(/\//g, '-')) } }),
+    retry: retryLostConnection,
+    onSuccess: async (tag) => {
+      await changed(tag);
+      await qc.invalidateQueries({ queryKey: tagKeys.notices() });
+    },
   });
 }
 
 export const useClearTagMutation = (id: number) => useTagAction<ClearTagInput>(id, 'clear');
 export const useClearInAbsenceMutation = (id: number) => useTagAction<ClearInAbsenceInput>(id, 'clear-in-absence');
+export const useReassignInAbsenceMutation = (id: number) => useTagAction<ReassignInAbsenceInput>(id, 'reassign-in-absence');
 export const useExtendTagMutation = (id: number) => useTagAction<ExtendTagInput>(id, 'extend');
-/** Called by the on-coming person: they become the holder. */
-export const useHandoverTagMutation = (id: number) => useTagAction<HandoverInput>(id, 'handover');
+export const useProveTagMutation = (id: number) => useTagAction<ProofInput>(id, 'prove');
+/** The holder names the colleague who is to take the tag; nothing changes hands until they accept. */
+export const useOfferHandoverMutation = (id: number) => useTagAction<HandoverOfferInput>(id, 'handover');
+/** The named colleague accepts with the number of the lock they have just put on. */
+export const useAcceptHandoverMutation = (id: number) => useTagAction<HandoverAcceptInput>(id, 'handover/accept');
+export const useWithdrawHandoverMutation = (id: number) => useTagAction<Record<string, never>>(id, 'handover/withdraw');
+export const useAcknowledgeTagMutation = (id: number) => useTagAction<Record<string, never>>(id, 'acknowledge');
 export const useAddTagNoteMutation = (id: number) => useTagAction<{ text: string }>(id, 'notes');
+
+/** Tags cleared or reassigned while the caller was away, not yet acknowledged. */
+export function useTagNoticesQuery(enabled = true) {
+  return useQuery({ queryKey: tagKeys.notices(), queryFn: () => request<TagNotice[]>('/tag-notices'), enabled });
+}
+
+/** Colleagues a tag can be offered or reassigned to. */
+export function useTagColleaguesQuery(enabled = true) {
+  return useQuery({ queryKey: tagKeys.colleagues(), queryFn: () => request<{ id: number; name: string; role: string }[]>('/tag-colleagues'), enabled });
+}
 
 /** A photo of the lock or tag in place, added to a live tag. */
 export function useAddTagPhotoMutation(id: number) {
   const changed = useTagChanged();
   return useMutation({
-    mutationFn: (asset: ImagePickerAsset) => request<Tag>(`/tags/${id}/photos`, { method: 'POST', body: photoFormData(asset) }),
+    mutationFn: (asset: ImagePickerAsset) => request<Tag>(`/tags/${id}/photos`, { method: 'POST', body: photoFormData(asset), headers: { 'Idempotency-Key': keyFor(asset, 'photo') } }),
+    retry: retryLostConnection,
     onSuccess: changed,
   });
 }

@@ -33,7 +33,7 @@ export default function TagScreen() {
             <TagTimeline events={t.events ?? []} timeZone={t.asset.timeZone} now={now} />
           </Card>
         );
-        const actions = me ? <TagActions tag={t} me={me} /> : null;
+        const actions = me ? <TagActions tag={t} me={me} now={now} /> : null;
         const canAddPhoto = t.status === 'live' && !!me && me.role !== 'viewer';
         const photos = (
           <Card>
