@@ -1,8 +1,9 @@
 import path from 'node:path';
-import { readConfig } from '@/server/config';
+import { assertStartable, readConfig } from '@/server/config';
 import { createSequelize, migrate } from '@/server/db';
 import { startServer } from '@/server/index';
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '@/server/seed/demo';
+import { demoSeedDecision, demoWarning } from '@/server/seed/demo-guard';
 import { readOrCreateSecret, startLocalDatabase } from '@/scripts/lib/local-db';
 import { buildWebIfChanged } from '@/scripts/lib/web-build';
 import { startLocalMailServer } from '@/scripts/lib/maildev';
@@ -12,6 +13,8 @@ const say = (line: string) => console.log(`[isoledger] ${line}`);
 async function main() {
   const config = readConfig();
   config.jwtSecret ||= readOrCreateSecret(path.join(config.dataDir, 'jwt-secret'), 48);
+  // A weak secret stops the start before the database or anything else is started.
+  assertStartable(config);
   const stops: (() => Promise<void>)[] = [];
   let stopping = false;
   const shutdown = async (code: number) => {
@@ -35,8 +38,12 @@ async function main() {
     }
     const sequelize = createSequelize(databaseUrl);
     await migrate(sequelize);
-    if (process.env.DEMO !== '0') {
-      say((await seedDemo(sequelize)) ? 'demo organisation seeded' : 'demo organisation already present');
+    const demo = demoSeedDecision(process.env, config.publicUrl);
+    if (demo.seed) {
+      say(`${(await seedDemo(sequelize, { bcryptCost: config.bcryptCost })) ? 'demo organisation seeded' : 'demo organisation already present'} (${demo.reason})`);
+      say(demoWarning());
+    } else {
+      say(`demo organisation not seeded: ${demo.reason}`);
     }
     await sequelize.close();
 
@@ -55,8 +62,10 @@ async function main() {
     stops.push(running.close);
 
     say(`Isoledger is running at ${config.publicUrl}`);
-    say(`demo sign-ins (password "${DEMO_PASSWORD}"):`);
-    for (const u of DEMO_USERS) say(`  ${u.role.padEnd(10)} ${u.email}`);
+    if (demo.seed) {
+      say(`demo sign-ins (password "${DEMO_PASSWORD}"):`);
+      for (const u of DEMO_USERS) say(`  ${u.role.padEnd(10)} ${u.email}`);
+    }
     say('press Ctrl-C to stop the server and the database');
   } catch (err) {
     console.error(err);

@@ -1,3 +1,4 @@
+import compression from 'compression';
 import express from 'express';
 import fs from 'node:fs';
 import path from 'node:path';
@@ -5,7 +6,8 @@ import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
 import type { ServerConfig } from '@/server/config';
-import { logger } from '@/server/lib/logger';
+import { logger, redactUrl } from '@/server/lib/logger';
+import type { Logger } from 'pino';
 import { errorHandler, notFoundApi } from '@/server/middleware/error-handler';
 import { authRoutes } from '@/server/routes/auth.routes';
 import { calcRoutes } from '@/server/routes/calc.routes';
@@ -25,12 +27,17 @@ import { sitesRoutes } from '@/server/routes/sites.routes';
 import { boardRoutes } from '@/server/routes/board.routes';
 import { teamRoutes } from '@/server/routes/team.routes';
 import { accountRoutes } from '@/server/routes/account.routes';
+import { meRoutes } from '@/server/routes/me.routes';
+import { visitsRoutes } from '@/server/routes/visits.routes';
+import { webStatic } from '@/server/lib/web-static';
 
 export interface AppContext {
   sequelize: Sequelize;
   config: ServerConfig;
   /** Photo files; made from config.storage when not given. */
   storage?: PhotoStorage;
+  /** Where request lines go; by default the server's logger (none under NODE_ENV=test). */
+  requestLog?: Logger;
 }
 
 /** Builds the Express app; never listens (server/index.ts does). */
@@ -63,14 +70,18 @@ export function createApp(ctx: AppContext) {
       strictTransportSecurity: false,
     }),
   );
-  if (process.env.NODE_ENV !== 'test') app.use(
+  const log = ctx.requestLog ?? (process.env.NODE_ENV === 'test' ? null : logger);
+  if (log) app.use(
       pinoHttp({
-        logger,
+        logger: log,
         autoLogging: { ignore: (req) => req.url === '/api/health' },
-        // One short line per request: no headers, so no tokens in the log.
-        serializers: { req: (req) => ({ method: req.method, url: req.url }), res: (res) => ({ statusCode: res.statusCode }) },
+        // One short line per request: no headers, and one-time tokens cut out of the URL.
+        serializers: { req: (req) => ({ method: req.method, url: redactUrl(req.url) }), res: (res) => ({ statusCode: res.statusCode }) },
       }),
     );
+
+  // gzip or brotli for JSON, CSV and the app shell when the browser asks; built files come precompressed (web-static).
+  app.use(compression());
 
   const api = express.Router();
   api.use(express.json({ limit: '256kb' }));
@@ -90,17 +101,13 @@ export function createApp(ctx: AppContext) {
   api.use(boardRoutes(ctx));
   api.use(teamRoutes(ctx));
   api.use(accountRoutes(ctx));
+  api.use(visitsRoutes(ctx));
+  api.use(meRoutes(ctx));
   api.use(notFoundApi);
   app.use('/api', api);
 
   const webDir = ctx.config.webDir;
-  if (webDir && fs.existsSync(path.join(webDir, 'index.html'))) {
-    app.use(express.static(webDir, { index: false, maxAge: '1h' }));
-    // Client-side routes (e.g. /sites/3, /l/CODE) load the app shell on a hard refresh.
-    app.get(/^(?!\/api\/).*/, (_req, res) => {
-      res.set('Cache-Control', 'no-cache').sendFile(path.join(webDir, 'index.html'));
-    });
-  }
+  if (webDir && fs.existsSync(path.join(webDir, 'index.html'))) app.use(webStatic(webDir));
   app.use(errorHandler);
   return app;
 }

@@ -91,3 +91,14 @@ export function readConfig(env: Record<string, string | undefined> = process.env
     ...overrides,
   };
 }
+
+/** HS256 wants a key at least as long as its 256-bit output (RFC 7518 §3.2). */
+export const MIN_JWT_SECRET_BYTES = 32;
+
+/** Refuses a configuration the server must not run with; called before anything starts. */
+export function assertStartable(config: ServerConfig): void {
+  const bytes = Buffer.byteLength(config.jwtSecret, 'utf8');
+  if (bytes < MIN_JWT_SECRET_BYTES) {
+    throw new Error(`JWT_SECRET must be at least ${MIN_JWT_SECRET_BYTES} bytes (it is ${bytes}). Generate one with: openssl rand -base64 48`);
+  }
+}

@@ -1,12 +1,14 @@
 import type { Server } from 'node:http';
 import { createApp } from '@/server/app';
-import type { ServerConfig } from '@/server/config';
+import { assertStartable, type ServerConfig } from '@/server/config';
 import { createSequelize, migrate } from '@/server/db';
+import { backgroundSettled } from '@/server/lib/background';
 import { logger } from '@/server/lib/logger';
 import { startMailJobs } from '@/server/mail/mail-jobs';
 
 /** Connects, migrates and listens on 127.0.0.1 (or HOST). Returns a function that closes everything. */
 export async function startServer(config: ServerConfig, databaseUrl: string): Promise<{ server: Server; close: () => Promise<void> }> {
+  assertStartable(config);
   const sequelize = createSequelize(databaseUrl);
   await sequelize.authenticate();
   await migrate(sequelize);
@@ -24,6 +26,7 @@ export async function startServer(config: ServerConfig, databaseUrl: string): Pr
     close: async () => {
       await new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections?.();
+      await backgroundSettled();
       await stopMailJobs();
       await sequelize.close();
     },

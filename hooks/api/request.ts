@@ -1,12 +1,12 @@
-import type { ApiErrorBody } from '@/shared/types/user';
+import type { ApiErrorBody, ErrorCode, FieldErrors } from '@/shared/types/api';
 
 /** An API failure in a form people can read; `fields` maps form fields to messages. */
 export class RequestError extends Error {
   constructor(
     public readonly status: number,
-    public readonly code: string,
+    public readonly code: ErrorCode,
     message: string,
-    public readonly fields?: Record<string, string>,
+    public readonly fields?: FieldErrors,
   ) {
     super(message);
     this.name = 'RequestError';

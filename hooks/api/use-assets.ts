@@ -7,7 +7,7 @@ import { siteKeys } from '@/hooks/api/use-sites';
 import type { AssetType } from '@/shared/rules/register';
 import type { AssetInput } from '@/shared/schemas/register';
 import type { Asset, ImportResult, Photo } from '@/shared/types/register';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 export interface AssetFilters {
   q?: string;

@@ -5,7 +5,7 @@ import { photoFormData } from '@/hooks/api/use-photos';
 import { siteKeys } from '@/hooks/api/use-sites';
 import type { PlantRoomInput } from '@/shared/schemas/register';
 import type { Photo, PlantRoom } from '@/shared/types/register';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 export const plantRoomKeys = {
   all: ['plant-rooms'] as const,

@@ -2,7 +2,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { request } from '@/hooks/api/request';
 import type { SiteInput } from '@/shared/schemas/register';
 import type { Site } from '@/shared/types/register';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 export const siteKeys = {
   all: ['sites'] as const,

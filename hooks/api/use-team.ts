@@ -4,7 +4,7 @@ import { boardKeys } from '@/hooks/api/use-board';
 import { MAX_PAGE_SIZE } from '@/shared/rules/paging';
 import type { ChangeUserInput, InviteUserInput } from '@/shared/schemas/team';
 import type { TeamMember } from '@/shared/types/team';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 /** One line of `GET /api/audit`, as server/services/users.service.ts answers it. */
 export interface AuditEntry {

@@ -2,12 +2,13 @@ import { spawnSync } from 'node:child_process';
 import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
+import { precompress } from '@/scripts/lib/precompress';
 import { copyZxingWasm } from '@/scripts/lib/zxing-wasm';
 
 const ROOT = path.resolve(__dirname, '../..');
 const DIST = path.join(ROOT, 'dist');
 const STAMP = path.join(DIST, '.source-hash');
-const SOURCES = ['app', 'components', 'hooks', 'shared', 'assets', 'app.json', 'package-lock.json', 'metro.config.js', 'babel.config.js', 'scripts/lib/web-build.ts', 'scripts/lib/zxing-wasm.ts'];
+const SOURCES = ['app', 'components', 'hooks', 'shared', 'assets', 'app.json', 'package-lock.json', 'metro.config.js', 'babel.config.js', 'scripts/lib/web-build.ts', 'scripts/lib/zxing-wasm.ts', 'scripts/lib/precompress.ts'];
 
 function hashTree(hash: crypto.Hash, target: string) {
   if (!fs.existsSync(target)) return;
@@ -47,6 +48,8 @@ export function buildWeb(log: (line: string) => void) {
  */
 function afterExport(dist: string) {
   copyZxingWasm(path.join(dist, 'wasm'));
+  // Last, so that every file written above is compressed too.
+  precompress(dist);
 }
 
 export async function buildWebIfChanged(log: (line: string) => void) {

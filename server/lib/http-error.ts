@@ -1,10 +1,12 @@
+import type { ErrorCode, FieldErrors } from '@/shared/types/api';
+
 /** A failure with an HTTP status and a stable machine-readable code; the error handler sends it as JSON. */
 export class HttpError extends Error {
   constructor(
     public readonly status: number,
-    public readonly code: string,
+    public readonly code: ErrorCode,
     message: string,
-    public readonly fields?: Record<string, string>,
+    public readonly fields?: FieldErrors,
   ) {
     super(message);
     this.name = 'HttpError';
@@ -14,5 +16,5 @@ export class HttpError extends Error {
 export const notFound = (what = 'Record') => new HttpError(404, 'not-found', `${what} not found.`);
 export const forbidden = (message = 'Your role does not allow this.') => new HttpError(403, 'forbidden', message);
 export const conflict = (message: string) => new HttpError(409, 'conflict', message);
-export const unprocessable = (message: string, fields?: Record<string, string>) =>
+export const unprocessable = (message: string, fields?: FieldErrors) =>
   new HttpError(422, 'invalid', message, fields);

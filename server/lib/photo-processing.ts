@@ -1,5 +1,6 @@
 import sharp, { type Metadata } from 'sharp';
 import { HttpError } from '@/server/lib/http-error';
+import { WorkLimit } from '@/server/lib/work-limit';
 
 export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
 /** 40 megapixels: above any phone camera in use, far below what would exhaust memory when decoded. */
@@ -23,7 +24,22 @@ const ACCEPTED_TEXT = 'JPEG, PNG, WebP or AVIF';
  * decode safely, then re-encodes to JPEG: upright by its EXIF orientation, every metadata block
  * (EXIF with GPS position, XMP, IPTC, comments) left behind, plus a thumbnail.
  */
-export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
+export function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
+  return imageWork.run(() => decodeAndEncode(input));
+}
+
+/**
+ * Decoding a 40-megapixel image takes about 160 MB and a core: two run at once, four wait (each holding its upload of
+ * up to 10 MB), and anything more is told to come back (503 with Retry-After).
+ */
+export const imageWork = new WorkLimit({
+  concurrency: 2,
+  queue: 4,
+  retryAfterSeconds: 10,
+  busyMessage: 'The server is busy processing other photos. Try again in a few seconds.',
+});
+
+async function decodeAndEncode(input: Buffer): Promise<ProcessedPhoto> {
   let meta: Metadata;
   try {
     // Reads the header only, so no pixel limit is needed yet; the dimensions are checked just below.

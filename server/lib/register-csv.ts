@@ -31,6 +31,10 @@ export const ATTRIBUTE_KEYS: string[] = [...new Set(ASSET_TYPES.flatMap((t) => O
 export const REGISTER_COLUMNS: string[] = [...BASE_COLUMNS, ...ATTRIBUTE_KEYS.map((k) => `attributes.${k}`)];
 
 export const MAX_IMPORT_ROWS = 5000;
+/** Every register column plus the export-only ones fit well within this; more is not a register file. */
+export const MAX_IMPORT_COLUMNS = 200;
+/** The longest row, in characters: 200 columns of generous notes. */
+export const MAX_IMPORT_ROW_CHARS = 64 * 1024;
 
 const squash = (s: string) => s.trim().toLowerCase().replace(/[\s_-]+/g, '');
 const HEADER_LOOKUP = new Map<string, string>([
@@ -74,7 +78,17 @@ export function readRegisterCsv(input: Buffer): { records: CsvRecord[]; columns:
   let table: string[][];
   try {
     // Blank lines are kept (and skipped below) so record numbers stay spreadsheet row numbers.
-    table = parse(input, { bom: true, relax_column_count: true, skip_empty_lines: false });
+    table = parse(input, {
+      bom: true,
+      relax_column_count: true,
+      skip_empty_lines: false,
+      max_record_size: MAX_IMPORT_ROW_CHARS,
+      // Refused while parsing, so a row of a million empty cells never becomes a million strings.
+      on_record: (record: string[], { lines }: { lines: number }) => {
+        if (record.length > MAX_IMPORT_COLUMNS) throw Object.assign(new Error(`Row ${lines} has ${record.length} columns; a register file has at most ${MAX_IMPORT_COLUMNS}.`), { lines });
+        return record;
+      },
+    });
   } catch (err) {
     const line = (err as { lines?: number }).lines;
     return { records: [], columns: [], errors: [{ row: line ?? 1, column: '', message: `The file is not valid CSV: ${(err as Error).message}` }] };

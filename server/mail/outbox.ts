@@ -12,6 +12,7 @@ export const MAIL_KINDS = [
   'digest',
   'invite',
   'password-reset',
+  'visit-summary',
 ] as const;
 export type MailKind = (typeof MAIL_KINDS)[number];
 

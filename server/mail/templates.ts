@@ -1,6 +1,7 @@
 import type { MailKind } from '@/server/mail/outbox';
 import { formatInZone, renderBlocks, type Block, type RenderedMail } from '@/server/mail/render';
 import type { TagSnapshot } from '@/server/mail/tag-mail';
+import { renderVisitMail, type VisitMailPayload } from '@/server/mail/visit-mail';
 
 /** The product records; it never makes plant safe. Every tag e-mail says so. */
 const RECORD_ONLY = 'Isoledger is a record only. Follow your site isolation procedure and permit system, and prove the plant safe yourself before any work.';
@@ -110,6 +111,7 @@ function linkMail(kind: 'invite' | 'password-reset', p: LinkPayload, url: (path:
 /** Renders an outbox row; links are built from PUBLIC_URL at send time. */
 export function renderMail(kind: MailKind, payload: Record<string, unknown>, publicUrl: string): RenderedMail {
   const url = (path: string) => `${publicUrl}${path}`;
+  if (kind === 'visit-summary') return renderVisitMail(payload as unknown as VisitMailPayload, url);
   if (kind === 'digest') return digestMail(payload as unknown as DigestPayload, url);
   if (kind === 'invite' || kind === 'password-reset') return linkMail(kind, payload as unknown as LinkPayload, url);
   return tagMail(kind, payload as unknown as TagPayload, url);

@@ -1,5 +1,6 @@
 import type { RequestHandler } from 'express';
 import jwt from 'jsonwebtoken';
+import { may, type RolePermission } from '@/shared/rules/permissions';
 import type { Role } from '@/shared/rules/roles';
 import { HttpError, forbidden } from '@/server/lib/http-error';
 import { User } from '@/server/models/user.model';
@@ -54,6 +55,21 @@ export const auth =
     }
   };
 
+/** Refuses (403) an actor the permission map (shared/rules/permissions.ts) does not allow; behind `auth`. */
+export const requirePermission =
+  (permission: RolePermission): RequestHandler =>
+  (req, _res, next) => {
+    if (!req.user) return next(unauthenticated());
+    if (!may(req.user, permission)) return next(forbidden());
+    next();
+  };
+
+/** The same check inside a service, where the refusal can say why in the trade's words. */
+export function ensurePermission(actor: AuthUser, permission: RolePermission, message?: string) {
+  if (!may(actor, permission)) throw forbidden(message);
+}
+
+/** @deprecated name a permission of shared/rules/permissions.ts with `requirePermission` instead. */
 export const requireRole =
   (...roles: Role[]): RequestHandler =>
   (req, _res, next) => {

@@ -3,6 +3,8 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 export class Organisation extends Model<InferAttributes<Organisation>, InferCreationAttributes<Organisation>> {
   declare id: CreationOptional<number>;
   declare name: string;
+  /** Whether visit summaries also go to a site's client contact. */
+  declare visitSummaryToClient: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -11,6 +13,7 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
         name: { type: DataTypes.STRING(160), allowNull: false },
+        visitSummaryToClient: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,6 +1,7 @@
 import { Router } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { AppContext } from '@/server/app';
+import { afterResponse } from '@/server/lib/background';
+import { accountAndAddressLimits, addressKey, attemptLimiter } from '@/server/middleware/attempt-limits';
 import { auth, currentUser } from '@/server/middleware/auth';
 import { validate } from '@/server/middleware/validate';
 import { RESET_REQUEST_ANSWER, requestPasswordReset, setPasswordWithToken } from '@/server/services/password.service';
@@ -15,22 +16,15 @@ import { mySettingsSchema, resetRequestSchema, setPasswordSchema } from '@/share
  */
 export function accountRoutes({ sequelize, config }: AppContext) {
   const router = Router();
-  // The same allowance as sign-in, so the form cannot be used to flood an inbox or probe for tokens.
-  const limiter = rateLimit({
-    windowMs: config.loginRateLimit.windowMs,
-    limit: config.loginRateLimit.max,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${req.path}`,
-    handler: (_req, res, _next, options) => {
-      res.status(options.statusCode).json({ error: { code: 'rate-limited', message: 'Too many attempts. Wait a few minutes and try again.' } });
-    },
-  });
-  router.post('/auth/password/reset-request', limiter, validate(resetRequestSchema), async (req, res) => {
-    await requestPasswordReset(sequelize, req.body, req.ip ?? null);
+  // The same allowance as sign-in, so the forms cannot be used to flood an inbox or probe for tokens.
+  const resetLimits = accountAndAddressLimits(config, 'reset', { countAll: true });
+  const setLimit = attemptLimiter(config, 'set-password', addressKey);
+  router.post('/auth/password/reset-request', ...resetLimits, validate(resetRequestSchema), (req, res) => {
+    // Answered before any work is done, so a known address and an unknown one take the same time.
     res.status(202).json(RESET_REQUEST_ANSWER);
+    afterResponse('password reset request', () => requestPasswordReset(sequelize, req.body, req.ip ?? null));
   });
-  router.post('/auth/password/set', limiter, validate(setPasswordSchema), async (req, res) => {
+  router.post('/auth/password/set', setLimit, validate(setPasswordSchema), async (req, res) => {
     res.json(await setPasswordWithToken(sequelize, config, req.body, req.ip ?? null));
   });
   router.get('/me/settings', auth(config.jwtSecret), async (req, res) => {

@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { AppContext } from '@/server/app';
+import { accountAndAddressLimits } from '@/server/middleware/attempt-limits';
 import { auth, currentUser } from '@/server/middleware/auth';
 import { validate } from '@/server/middleware/validate';
 import { getMe, signIn, signOut } from '@/server/services/auth.service';
@@ -8,21 +8,9 @@ import { signInSchema } from '@/shared/schemas/auth';
 
 export function authRoutes({ config }: AppContext) {
   const router = Router();
-  const loginLimiter = rateLimit({
-    windowMs: config.loginRateLimit.windowMs,
-    limit: config.loginRateLimit.max,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    // Counted per address and e-mail, so one person's typos do not lock out a whole office behind one address.
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').trim().toLowerCase()}`,
-    handler: (_req, res, _next, options) => {
-      res.status(options.statusCode).json({
-        error: { code: 'rate-limited', message: 'Too many sign-in attempts. Wait a few minutes and try again.' },
-      });
-    },
-  });
+  const loginLimits = accountAndAddressLimits(config, 'sign-in', { message: 'Too many sign-in attempts. Wait a few minutes and try again.' });
 
-  router.post('/auth/login', loginLimiter, validate(signInSchema), async (req, res) => {
+  router.post('/auth/login', ...loginLimits, validate(signInSchema), async (req, res) => {
     res.json(await signIn(req.body, config, req.ip ?? null));
   });
   router.post('/auth/logout', auth(config.jwtSecret), async (req, res) => {

@@ -5,7 +5,7 @@ import { requireFile, singleFileUpload } from '@/server/lib/uploads';
 import { auth, currentUser, requireRole } from '@/server/middleware/auth';
 import { validate } from '@/server/middleware/validate';
 import { addPhoto } from '@/server/services/photos.service';
-import { createPlantRoom, getPlantRoom, updatePlantRoom } from '@/server/services/plant-rooms.service';
+import { createPlantRoom, openPlantRoom, updatePlantRoom } from '@/server/services/plant-rooms.service';
 import { parseId } from '@/server/services/register-access';
 import { plantRoomPatchSchema, plantRoomSchema } from '@/shared/schemas/register';
 
@@ -18,7 +18,7 @@ export function plantRoomsRoutes({ config, storage }: AppContext) {
     res.status(201).json(await createPlantRoom(currentUser(req), req.body));
   });
   router.get('/plant-rooms/:id', signedIn, async (req, res) => {
-    res.json(await getPlantRoom(currentUser(req), parseId(req.params.id)));
+    res.json(await openPlantRoom(currentUser(req), parseId(req.params.id)));
   });
   router.patch('/plant-rooms/:id', signedIn, editors, validate(plantRoomPatchSchema), async (req, res) => {
     res.json(await updatePlantRoom(currentUser(req), parseId(req.params.id), req.body));

@@ -3,7 +3,7 @@ import { Site } from '@/server/models/site.model';
 import { UserSiteAccess } from '@/server/models/user-site-access.model';
 import { Organisation } from '@/server/models/organisation.model';
 import { User } from '@/server/models/user.model';
-import { hashPassword } from '@/server/services/auth.service';
+import { hashPassword } from '@/server/lib/passwords';
 import { readConfig } from '@/server/config';
 import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import type { PhotoStorage } from '@/server/lib/photo-storage';

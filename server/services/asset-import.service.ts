@@ -1,3 +1,4 @@
+import { WorkLimit } from '@/server/lib/work-limit';
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import { ValidationError } from 'yup';
 import { ATTRIBUTE_KEYS, BASE_COLUMNS, readRegisterCsv, registerExportOnlyColumns, writeRegisterCsv } from '@/server/lib/register-csv';
@@ -153,7 +154,14 @@ async function plan(actor: AuthUser, records: ReturnType<typeof readRegisterCsv>
  * everything is written in one transaction, or nothing when any row has an error. Rows match stored items
  * by site + plant ID, so importing the same file again updates instead of duplicating.
  */
-export async function importRegisterCsv(actor: AuthUser, sequelize: Sequelize, file: Buffer, dryRun: boolean): Promise<ImportResult> {
+/** One import at a time, one more waiting: each parses up to 5 MB and checks thousands of rows in one transaction. */
+export const importWork = new WorkLimit({ concurrency: 1, queue: 1, retryAfterSeconds: 15, busyMessage: 'Another import is running. Try again in a few seconds.' });
+
+export function importRegisterCsv(actor: AuthUser, sequelize: Sequelize, file: Buffer, dryRun: boolean): Promise<ImportResult> {
+  return importWork.run(() => importNow(actor, sequelize, file, dryRun));
+}
+
+async function importNow(actor: AuthUser, sequelize: Sequelize, file: Buffer, dryRun: boolean): Promise<ImportResult> {
   const parsed = readRegisterCsv(file);
   const result: ImportResult = { dryRun, rows: parsed.records.length, created: 0, updated: 0, unchanged: 0, newPlantRooms: [], errors: parsed.errors };
   if (parsed.errors.length) return result;

@@ -14,7 +14,7 @@ import { firstAssetPhotoIds, photosOf } from '@/server/services/photos.service';
 import { assertCanEdit, plantRoomForField, siteForField } from '@/server/services/register-access';
 import { toAssetDto } from '@/server/services/register-dto';
 import type { Asset as AssetDto } from '@/shared/types/register';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 type Paging = { page: number; pageSize: number; offset: number };
 

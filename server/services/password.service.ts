@@ -8,7 +8,7 @@ import { Organisation } from '@/server/models/organisation.model';
 import { PasswordToken, type PasswordTokenPurpose } from '@/server/models/password-token.model';
 import { User } from '@/server/models/user.model';
 import { recordAudit } from '@/server/services/audit.service';
-import { hashPassword } from '@/server/services/auth.service';
+import { hashPassword } from '@/server/lib/passwords';
 import { INVITE_TTL_HOURS, RESET_TTL_HOURS } from '@/shared/rules/notifications';
 import type { ResetRequestInput, SetPasswordInput } from '@/shared/schemas/team';
 import type { ResetRequestResponse, SetPasswordResponse } from '@/shared/types/team';

@@ -7,9 +7,11 @@ import { User } from '@/server/models/user.model';
 import { photosOf } from '@/server/services/photos.service';
 import { assertCanEdit, findPlantRoom, findSite, siteForField } from '@/server/services/register-access';
 import { toPlantRoomDto } from '@/server/services/register-dto';
+import { liveTagCounts, liveTagsIn } from '@/server/services/live-tags.service';
+import { recordOpened } from '@/server/services/recent-places.service';
 import type { PlantRoomInput } from '@/shared/schemas/register';
 import type { PlantRoom as PlantRoomDto, SafetyLocations } from '@/shared/types/register';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 type Paging = { page: number; pageSize: number; offset: number };
 export type PlantRoomPatch = Partial<Omit<PlantRoomInput, 'siteId' | 'safety'>> & { safety?: Partial<SafetyLocations> };
@@ -33,7 +35,8 @@ async function toDtos(rooms: PlantRoom[]): Promise<PlantRoomDto[]> {
     );
     for (const r of rows) counts.set(Number(r.roomId), Number(r.n));
   }
-  return rooms.map((r) => toPlantRoomDto(r, { assetCount: counts.get(r.id) ?? 0, photos: photos.get(r.id) ?? [] }));
+  const live = await liveTagCounts(rooms[0]?.organisationId ?? 0, 'plantRoom', ids);
+  return rooms.map((r) => toPlantRoomDto(r, { assetCount: counts.get(r.id) ?? 0, liveTagCount: live.get(r.id) ?? 0, photos: photos.get(r.id) ?? [] }));
 }
 
 export async function listSitePlantRooms(actor: AuthUser, siteId: number, paging: Paging): Promise<ListResponse<PlantRoomDto>> {
@@ -52,6 +55,13 @@ export async function getPlantRoom(actor: AuthUser, id: number): Promise<PlantRo
   await findPlantRoom(actor, id);
   const room = await PlantRoom.findByPk(id, { include });
   return (await toDtos([room!]))[0];
+}
+
+/** A plant room as its screen opens it: with its live tags, and remembered among the person's recent places. */
+export async function openPlantRoom(actor: AuthUser, id: number): Promise<PlantRoomDto> {
+  const room = await getPlantRoom(actor, id);
+  await recordOpened(actor, 'plant-room', id);
+  return { ...room, liveTags: await liveTagsIn(actor, { plantRoomId: id }) };
 }
 
 export async function createPlantRoom(actor: AuthUser, input: PlantRoomInput): Promise<PlantRoomDto> {

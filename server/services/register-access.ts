@@ -3,11 +3,13 @@ import { HttpError, forbidden, notFound } from '@/server/lib/http-error';
 import type { AuthUser } from '@/server/middleware/auth';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { Site } from '@/server/models/site.model';
+import { parseId as parseIdOrNull } from '@/shared/rules/ids';
 import { isSupervisory } from '@/shared/rules/roles';
 
+/** An id from a path or query, or 400 (the rule is shared/rules/ids.ts). */
 export function parseId(raw: unknown): number {
-  const id = Number(raw);
-  if (!Number.isSafeInteger(id) || id <= 0) throw new HttpError(400, 'bad-id', 'The id must be a positive whole number.');
+  const id = parseIdOrNull(raw);
+  if (id === null) throw new HttpError(400, 'bad-id', 'The id must be a positive whole number.');
   return id;
 }
 

@@ -43,7 +43,7 @@ export function toSiteDto(site: Site, counts: { plantRoomCount: number; assetCou
   };
 }
 
-export function toPlantRoomDto(room: PlantRoom, extra: { assetCount: number; photos: Photo[] }): PlantRoomDto {
+export function toPlantRoomDto(room: PlantRoom, extra: { assetCount: number; liveTagCount: number; photos: Photo[] }): PlantRoomDto {
   return {
     id: room.id,
     siteId: room.siteId,
@@ -59,6 +59,7 @@ export function toPlantRoomDto(room: PlantRoom, extra: { assetCount: number; pho
       exits: room.exits,
     },
     assetCount: extra.assetCount,
+    liveTagCount: extra.liveTagCount,
     photos: extra.photos.map(toPhotoDto),
     createdBy: person(room.creator, room.createdBy),
     createdAt: room.createdAt.toISOString(),

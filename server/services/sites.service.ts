@@ -4,10 +4,12 @@ import type { AuthUser } from '@/server/middleware/auth';
 import { Site } from '@/server/models/site.model';
 import { toSiteDto } from '@/server/services/register-dto';
 import { findSite } from '@/server/services/register-access';
+import { liveTagsIn } from '@/server/services/live-tags.service';
+import { recordOpened } from '@/server/services/recent-places.service';
 import type { SiteInput } from '@/shared/schemas/register';
 import { isValidTimeZone } from '@/shared/rules/time-zone';
 import type { Site as SiteDto } from '@/shared/types/register';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 type Paging = { page: number; pageSize: number; offset: number };
 
@@ -52,8 +54,11 @@ export async function listSites(actor: AuthUser, paging: Paging): Promise<ListRe
   return { items: rows.map((s) => toSiteDto(s, counts.get(s.id)!)), total: count, page: paging.page, pageSize: paging.pageSize };
 }
 
+/** A site as its screen opens it: with its live tags, and remembered among the person's recent places. */
 export async function getSite(actor: AuthUser, id: number): Promise<SiteDto> {
-  return dto(await findSite(actor, id));
+  const site = await dto(await findSite(actor, id));
+  await recordOpened(actor, 'site', id);
+  return { ...site, liveTags: await liveTagsIn(actor, { siteId: id }) };
 }
 
 export async function createSite(actor: AuthUser, input: SiteInput): Promise<SiteDto> {

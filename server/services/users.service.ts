@@ -2,7 +2,7 @@ import { HttpError, notFound } from '@/server/lib/http-error';
 import { AuditEvent } from '@/server/models/audit-event.model';
 import { User } from '@/server/models/user.model';
 import type { AuthUser } from '@/server/middleware/auth';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 import { teamMembers } from '@/server/services/team.service';
 import type { TeamMember } from '@/shared/types/team';
 

@@ -31,3 +31,7 @@ export const DIGEST_LAST_HOUR = 12;
 export const INVITE_TTL_HOURS = 7 * 24;
 export const RESET_TTL_HOURS = 1;
 export const MIN_PASSWORD_LENGTH = 10;
+/** bcrypt uses only the first 72 bytes of a password (OpenBSD bcrypt(3)); longer ones are refused, not cut. */
+export const MAX_PASSWORD_BYTES = 72;
+/** UTF-8 length, as bcrypt counts it. */
+export const passwordBytes = (password: string) => new TextEncoder().encode(password).length;

@@ -1,9 +1,14 @@
 export const MAX_PAGE_SIZE = 200;
 export const DEFAULT_PAGE_SIZE = 50;
+/** No list holds more than this many pages; a larger page number is refused (400), not sent to the database. */
+export const MAX_PAGE = 100_000;
 
-/** Reads `page` and `pageSize` from a query string, capping the page size. */
+/**
+ * `page`, `pageSize` and the row offset from a query string: the values `pagingQuery` (shared/schemas/request.ts)
+ * has checked, or, on a route not yet behind it, raw text read leniently with both capped.
+ */
 export function readPaging(query: { page?: unknown; pageSize?: unknown }) {
-  const page = Math.max(1, Math.floor(Number(query.page) || 1));
+  const page = Math.min(MAX_PAGE, Math.max(1, Math.floor(Number(query.page) || 1)));
   const pageSize = Math.min(MAX_PAGE_SIZE, Math.max(1, Math.floor(Number(query.pageSize) || DEFAULT_PAGE_SIZE)));
   return { page, pageSize, offset: (page - 1) * pageSize };
 }

@@ -1,5 +1,5 @@
 import * as yup from 'yup';
-import { MIN_PASSWORD_LENGTH } from '@/shared/rules/notifications';
+import { MAX_PASSWORD_BYTES, MIN_PASSWORD_LENGTH, passwordBytes } from '@/shared/rules/notifications';
 import { ROLES } from '@/shared/rules/roles';
 
 const email = yup.string().trim().lowercase().email('Enter a valid e-mail address.').max(254).required('Enter an e-mail address.');
@@ -36,8 +36,9 @@ export const setPasswordSchema = yup.object({
   password: yup.string()
     .required('Choose a password.')
     .min(MIN_PASSWORD_LENGTH, `At least ${MIN_PASSWORD_LENGTH} characters.`)
-    .max(200)
-    .test('not-blank', `At least ${MIN_PASSWORD_LENGTH} characters that are not spaces.`, (p) => !p || p.trim().length >= MIN_PASSWORD_LENGTH),
+    .test('not-blank', `At least ${MIN_PASSWORD_LENGTH} characters that are not spaces.`, (p) => !p || p.trim().length >= MIN_PASSWORD_LENGTH)
+    // bcrypt reads only the first 72 bytes; a longer password would be cut without a word, so it is refused.
+    .test('bytes', `At most ${MAX_PASSWORD_BYTES} bytes (about ${MAX_PASSWORD_BYTES} letters, fewer with accents or symbols).`, (p) => !p || passwordBytes(p) <= MAX_PASSWORD_BYTES),
 });
 export type SetPasswordInput = yup.InferType<typeof setPasswordSchema>;
 

@@ -12,6 +12,8 @@ export interface Site {
   clientContactEmail: string | null;
   plantRoomCount: number;
   assetCount: number;
+  /** Single site only: every live tag on the site, most urgent first. */
+  liveTags?: Tag[];
   createdAt: string;
   updatedAt: string;
 }
@@ -45,6 +47,10 @@ export interface PlantRoom {
   accessNotes: string;
   safety: SafetyLocations;
   assetCount: number;
+  /** Live isolations and overrides on items in the room. */
+  liveTagCount: number;
+  /** Single plant room only: its live tags, most urgent first. */
+  liveTags?: Tag[];
   photos: Photo[];
   createdBy: { id: number; name: string };
   createdAt: string;

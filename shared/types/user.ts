@@ -13,13 +13,5 @@ export interface SignInResponse {
   user: User;
 }
 
-export interface ListResponse<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
-
-export interface ApiErrorBody {
-  error: { code: string; message: string; fields?: Record<string, string> };
-}
+// Moved to the API contract module; kept here for the files that still import them from this one.
+export type { ApiErrorBody, ListResponse } from '@/shared/types/api';

@@ -8,7 +8,7 @@ import { BOARD_REFRESH_SECONDS } from '@/shared/rules/board';
 import type { BoardResponse } from '@/shared/types/board';
 import type { Asset } from '@/shared/types/register';
 import type { Tag } from '@/shared/types/tags';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 let session: Session;
 const baseUrl = inject('baseUrl');

@@ -1,4 +1,5 @@
 import request from 'supertest';
+import { backgroundSettled } from '@/server/lib/background';
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { clock } from '@/server/lib/clock';
 import { AuditEvent } from '@/server/models/audit-event.model';
@@ -17,7 +18,12 @@ afterAll(() => env.close());
 beforeEach(() => env.inbox.clear());
 afterEach(() => { clock.now = () => new Date(); });
 
-const resetRequest = (email: string) => request(env.t.app).post('/api/auth/password/reset-request').send({ email });
+// The link is issued after the answer has gone; wait for that work before looking at the outbox.
+const resetRequest = async (email: string) => {
+  const res = await request(env.t.app).post('/api/auth/password/reset-request').send({ email });
+  await backgroundSettled();
+  return res;
+};
 const setPassword = (token: string, password: string) => request(env.t.app).post('/api/auth/password/set').send({ token, password });
 const signIn = (email: string, password: string) => request(env.t.app).post('/api/auth/login').send({ email, password });
 const tokenIn = (text: string) => /\/set-password\?token=([A-Za-z0-9_-]+)/.exec(text)![1];
@@ -89,6 +95,17 @@ describe('POST /api/auth/password/set with a reset link', () => {
     const short = await setPassword('whatever', 'short');
     expect(short.status).toBe(422);
     expect(short.body.error.fields).toHaveProperty('password');
+  });
+
+  it('refuses a password over 72 bytes with a message saying so, rather than letting bcrypt cut it', async () => {
+    // OpenBSD bcrypt(3): only the first 72 bytes of the key are used.
+    const accents = 'é'.repeat(37); // 37 letters, 74 bytes in UTF-8
+    const res = await setPassword('whatever', accents);
+    expect(res.status).toBe(422);
+    expect(res.body.error.fields.password).toMatch(/72 bytes/);
+    expect((await setPassword('whatever', 'a'.repeat(73))).body.error.fields.password).toMatch(/72 bytes/);
+    // 72 bytes exactly passes the form check and reaches the link check.
+    expect((await setPassword('not-a-real-token', 'a'.repeat(72))).status).toBe(400);
   });
 });
 

@@ -1,0 +1,73 @@
+import { prepareDataForValidation, setIn, type FormikErrors, type FormikHelpers } from 'formik';
+import type { AnySchema } from 'yup';
+import { RequestError, errorMessage } from '@/hooks/api/request';
+import { validateFields } from '@/shared/schemas/field-errors';
+import type { ErrorCode, FieldErrors } from '@/shared/types/api';
+
+/** What a form shows in its status banner after a try: the server's refusal, or nothing. */
+export interface FormStatus {
+  status: number;
+  code: ErrorCode | 'unknown';
+  message: string;
+}
+
+/**
+ * Values as the shared schema should see them: Formik's own preparation (empty strings become undefined,
+ * so optional fields take their schema defaults) — the same the form's validation runs on.
+ */
+export const prepareValues = <T extends object>(values: T) => prepareDataForValidation(values as never) as T;
+
+/** Flat field messages (`attributes.capacityL`, `points[0].method`) as Formik's nested errors. */
+export function nestErrors<T>(fields: FieldErrors): FormikErrors<T> {
+  let nested: FormikErrors<T> = {};
+  for (const [path, message] of Object.entries(fields)) nested = setIn(nested, path, message);
+  return nested;
+}
+
+/** A failure as a form status: the HTTP status (0 without an answer), the code and the server's words. */
+export function failureStatus(err: unknown): FormStatus {
+  return err instanceof RequestError
+    ? { status: err.status, code: err.code, message: err.message }
+    : { status: 0, code: 'unknown', message: errorMessage(err) };
+}
+
+type Helpers<T> = Pick<FormikHelpers<T>, 'setErrors' | 'setStatus'>;
+
+/** A failure into the form: field messages beside their fields, everything in the status banner. */
+export function applyFailure<T>(err: unknown, { setErrors, setStatus }: Helpers<T>) {
+  if (err instanceof RequestError && err.fields) setErrors(nestErrors<T>(err.fields));
+  setStatus(failureStatus(err));
+}
+
+/**
+ * The one submit: clears the banner, runs the action (usually a mutation's `mutateAsync`), and on failure
+ * maps `error.fields` to the fields and the rest to the banner. Answers the action's result, or undefined.
+ *   onSubmit={(values, helpers) => submitForm(helpers, () => invite.mutateAsync(values))}
+ */
+export async function submitForm<T, R>(helpers: Helpers<T>, action: () => Promise<R>): Promise<R | undefined> {
+  helpers.setStatus(undefined);
+  try {
+    return await action();
+  } catch (err) {
+    applyFailure(err, helpers);
+    return undefined;
+  }
+}
+
+/**
+ * A Formik `validate` from a shared schema, run on the body the server will get (`toBody`), with `context`
+ * for rules that depend on the tag's kind or the actor's role. The server runs the same schema.
+ */
+export const validateWithSchema =
+  <T>(schema: AnySchema, toBody: (values: T) => unknown = (v) => v, context?: Record<string, unknown>) =>
+  async (values: T): Promise<FormikErrors<T>> =>
+    nestErrors<T>(await validateFields(schema, toBody(values), context));
+
+/** Errors worth showing: all of them once the person has tried to submit, before that only touched fields. */
+export function visibleErrors(errors: object, touched: Record<string, unknown>, submitCount: number): Record<string, string | undefined> {
+  const out: Record<string, string | undefined> = {};
+  for (const [k, v] of Object.entries(errors as Record<string, unknown>)) {
+    if (typeof v === 'string' && (submitCount > 0 || touched[k.split('.')[0]])) out[k] = v;
+  }
+  return out;
+}
