@@ -8,7 +8,7 @@ import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { BoardActions } from '@/components/board/board-actions';
 import { BoardCards } from '@/components/board/board-cards';
-import { BoardCounts } from '@/components/board/board-counts';
+import { BoardCounts, BoardReviewsOverdue } from '@/components/board/board-counts';
 import { BoardFilters, NO_BOARD_FILTERS, type BoardFilterState } from '@/components/board/board-filters';
 import { BoardTable } from '@/components/board/board-table';
 import { useBoardHolders } from '@/components/board/use-board-holders';
@@ -83,6 +83,7 @@ export default function BoardScreen() {
             onState={(state) => change({ ...filters, state })}
           />
         ) : null}
+        {data ? <BoardReviewsOverdue sites={data.reviewsOverdue} /> : null}
         <BoardFilters value={filters} onChange={change} sites={(sites.data?.items ?? []).map((s) => ({ value: s.id, label: s.name }))} holders={holders} />
         {!data ? (
           board.isPending ? <LoadingView /> : null

@@ -57,7 +57,7 @@ export function BoardTable({ rows, now, sort, onSort, paging, busy }: Props) {
         </View>
       ),
     },
-    { key: 'state', title: 'State', width: 178, sortable: true, render: (r) => <BoardStateMark state={r.state} testID={`board-state-${r.id}`} /> },
+    { key: 'state', title: 'State', width: 178, sortable: true, render: (r) => <BoardStateMark state={r.state} proved={r.proved} testID={`board-state-${r.id}`} /> },
   ];
   return (
     <DataTable

@@ -27,6 +27,7 @@ export function TagCard({ tag, now }: { tag: Tag; now: Date }) {
           <MaterialCommunityIcons name="chevron-right" size={24} color={colors.inkMuted} />
         </View>
         <Text numberOfLines={3}>{tag.reason}</Text>
+        {tag.status === 'live' && tag.proved === false ? <Text variant="small" bold testID={`tag-card-not-proved-${tag.id}`}>⚠ Not proved: no proof of isolation recorded</Text> : null}
         <View style={[styles.expiry, overdue && styles.expiryOverdue]}>
           <MaterialCommunityIcons name={overdue ? STATE_LOOK.overdue.icon : 'calendar-clock'} size={18} color={overdue ? colors.brandInk : colors.ink} />
           <Text variant="small" bold style={{ color: overdue ? colors.brandInk : colors.ink, flexShrink: 1 }}>

@@ -1,13 +1,12 @@
 import { Op, QueryTypes, type Sequelize } from 'sequelize';
 import { clock } from '@/server/lib/clock';
-import { forbidden, notFound, unprocessable } from '@/server/lib/http-error';
-import type { AuthUser } from '@/server/middleware/auth';
+import { notFound, unprocessable } from '@/server/lib/http-error';
+import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
 import { ProcedureReview } from '@/server/models/procedure-review.model';
 import { User } from '@/server/models/user.model';
 import { findSite } from '@/server/services/register-access';
 import { visibleSiteIds } from '@/server/services/site-access.service';
 import { isReviewOverdue, reviewDueOn } from '@/shared/rules/procedure-review';
-import { isSupervisory } from '@/shared/rules/roles';
 import { localDate } from '@/shared/rules/time-zone';
 import type { ProcedureReviewInput } from '@/shared/schemas/procedure-reviews';
 import type { ReviewOverdueSite } from '@/shared/types/board';
@@ -35,7 +34,7 @@ export async function listProcedureReviews(actor: AuthUser, siteId: number): Pro
 
 /** A supervisor or admin records a site's periodic review; the reviewer is not one of the engineers observed. */
 export async function createProcedureReview(actor: AuthUser, siteId: number, input: ProcedureReviewInput): Promise<ReviewDto> {
-  if (!isSupervisory(actor.role)) throw forbidden('Only a supervisor or admin records a procedure review.');
+  ensurePermission(actor, 'reviewProcedures', 'Only a supervisor or admin records a procedure review.');
   const site = await visibleSite(actor, siteId);
   const today = localDate(clock.now(), site.timeZone);
   const fields: Record<string, string> = {};

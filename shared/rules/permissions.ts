@@ -30,7 +30,9 @@ export const ROLE_PERMISSIONS = {
   annotateTag: ['admin', 'supervisor', 'engineer'],
   /** Oversee tags everywhere: clear in the holder's absence, extend others' tags, the longer expiry limit. */
   superviseTags: ['admin', 'supervisor'],
-  /** Replace an item's QR label (the old code stops working). */
+  /** Record a site's periodic review of its isolation procedure (OSHA 29 CFR 1910.147(c)(6)). */
+  reviewProcedures: ['admin', 'supervisor'],
+  /** Replace an item's QR label (the old code stops working); engineers only on items they may edit. */
   replaceLabel: ['admin', 'supervisor', 'engineer'],
   /** The board of live tags across sites. */
   viewBoard: ['admin', 'supervisor', 'viewer'],

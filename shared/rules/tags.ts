@@ -65,7 +65,7 @@ export interface TagLike {
   expiresAt: string | Date;
   holderId: number;
   /** Isolations only: a proof of the isolation has been recorded (OSHA 29 CFR 1910.147(d)(6)). */
-  proved?: boolean;
+  proved?: boolean | null;
 }
 
 const ms = (t: string | Date) => (t instanceof Date ? t.getTime() : Date.parse(t));

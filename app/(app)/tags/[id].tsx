@@ -9,6 +9,7 @@ import { Text } from '@/components/ui/text';
 import { TagActions } from '@/components/tags/tag-actions';
 import { TagFacts } from '@/components/tags/tag-facts';
 import { TagHeader } from '@/components/tags/tag-header';
+import { TagNoticesBanner } from '@/components/tags/tag-notices-banner';
 import { TagTimeline } from '@/components/tags/tag-timeline';
 import { useNow } from '@/components/tags/use-now';
 import { useMeQuery } from '@/hooks/api/use-auth';
@@ -45,6 +46,7 @@ export default function TagScreen() {
         const live = t.status === 'live';
         return (
           <Screen>
+            {me && me.role !== 'viewer' ? <TagNoticesBanner /> : null}
             <TagHeader tag={t} now={now} />
             {isWide ? (
               <View style={{ flexDirection: 'row', gap: space.lg, alignItems: 'flex-start' }}>

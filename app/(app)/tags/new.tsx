@@ -5,6 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { RaiseTagForm } from '@/components/tags/raise-tag-form';
+import { TagNoticesBanner } from '@/components/tags/tag-notices-banner';
 import { errorMessage } from '@/hooks/api/request';
 import { useAssetQuery } from '@/hooks/api/use-assets';
 import { useMeQuery } from '@/hooks/api/use-auth';
@@ -45,6 +46,7 @@ export default function RaiseTagScreen() {
         if (!site.data) return <LoadingView />;
         return (
           <Screen title={title} subtitle={subtitle}>
+            <TagNoticesBanner />
             <RaiseTagForm asset={item} site={site.data} me={me} initialKind={kind} onRaised={(tag) => router.replace(`/tags/${tag.id}`)} onCancel={() => (router.canGoBack() ? router.back() : router.replace(`/assets/${item.id}`))} />
           </Screen>
         );

@@ -74,12 +74,10 @@ describe('POST /api/assets/:id/label/replace', () => {
   });
 
   it('lets an engineer replace the label of an item they added', async () => {
-    const made = await request(t.app).post('/api/assets').set('Authorization', `Bearer ${tok.engineer}`)
-      .send({ siteId: plant.site.id, plantId: 'V-77', name: 'Strainer isolating valve', type: 'valve', energySources: [] });
-    expect(made.status).toBe(201);
-    const res = await request(t.app).post(`/api/assets/${made.body.id}/label/replace`).set('Authorization', `Bearer ${tok.engineer}`);
+    const mine = await createSiteWithAssets(u.engineer.organisationId, u.engineer.id, { name: 'Engineer’s own site' });
+    const res = await request(t.app).post(`/api/assets/${mine.valve.id}/label/replace`).set('Authorization', `Bearer ${tok.engineer}`);
     expect(res.status).toBe(200);
-    expect(res.body.retiredCode).toBe(made.body.labelCode);
+    expect(res.body.retiredCode).toBe(mine.valve.labelCode);
   });
 });
 

@@ -102,10 +102,12 @@ describe('POST /api/assets/:id/tags', () => {
     expect(gas.body.error.fields.energySources).toMatch(/gas/);
   });
 
-  it('creates one tag for a retried raise with the same Idempotency-Key, even when the retries race', async () => {
+  it('creates one tag for a retried raise with the same Idempotency-Key and body, even when the retries race', async () => {
     const before = await Tag.count();
     const key = { 'Idempotency-Key': 'raise-7f1c2b' };
-    const [a, b, c] = await Promise.all([1, 2, 3].map(() => as('engineer2').post(`/api/assets/${plant.valve.id}/tags`, isolation({ energySources: [], points: [{ description: 'Handle chained', method: 'valve-locked' }], kind: 'override', normalState: 'Open', leftState: 'Shut' }), key)));
+    // A retry sends the very same request again: same key, same body.
+    const body = isolation({ energySources: [], points: [{ description: 'Handle chained', method: 'valve-locked' }], kind: 'override', normalState: 'Open', leftState: 'Shut' });
+    const [a, b, c] = await Promise.all([1, 2, 3].map(() => as('engineer2').post(`/api/assets/${plant.valve.id}/tags`, body, key)));
     const ids = new Set([a.body.id, b.body.id, c.body.id]);
     expect(ids.size).toBe(1);
     expect([a.status, b.status, c.status].sort()).toEqual([200, 200, 201]);
