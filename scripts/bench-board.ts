@@ -10,7 +10,7 @@ import path from 'node:path';
 import { QueryTypes } from 'sequelize';
 import { createApp } from '@/server/app';
 import { readConfig } from '@/server/config';
-import { createSequelize, migrate } from '@/server/db';
+import { createSequelize, prepareDatabase } from '@/server/db';
 import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import { Asset } from '@/server/models/asset.model';
 import { Tag } from '@/server/models/tag.model';
@@ -18,7 +18,8 @@ import { User } from '@/server/models/user.model';
 import { UserSiteAccess } from '@/server/models/user-site-access.model';
 import { DEMO_PASSWORD, seedDemo } from '@/server/seed/demo';
 import { getBoard, readBoardFilters } from '@/server/services/board.service';
-import { asRoot, freePort, startPrivateMariaDb } from '@/scripts/lib/mariadb';
+import { freePort, startPrivateMariaDb } from '@/scripts/lib/mariadb';
+import { localAccounts, provisionDatabase } from '@/scripts/lib/local-db';
 
 const LIVE = Number(process.env.BENCH_LIVE ?? 2000);
 const CLEARED = Number(process.env.BENCH_CLEARED ?? 20000);
@@ -60,11 +61,11 @@ const stats = (ms: number[]) => {
 async function main() {
   const tmp = fs.mkdtempSync(path.join(os.tmpdir(), 'isoledger-bench-'));
   const db = await startPrivateMariaDb({ dataDir: path.join(tmp, 'db'), port: await freePort() });
-  await asRoot(db.port, ['CREATE DATABASE bench CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci']);
-  const sequelize = createSequelize(`mariadb://root@127.0.0.1:${db.port}/bench`);
+  const { ownerUrl, serverUrl } = await provisionDatabase(db, { ...localAccounts(tmp), database: 'bench' });
+  await prepareDatabase(ownerUrl, serverUrl);
+  const sequelize = createSequelize(serverUrl);
   let server: import('node:http').Server | null = null;
   try {
-    await migrate(sequelize);
     const config = readConfig({ DATA_DIR: tmp }, { jwtSecret: 'bench-secret-not-for-production', webDir: null, bcryptCost: 10, loginRateLimit: { max: 1000, windowMs: 60_000 } });
     await seedDemo(sequelize, { storage: createPhotoStorage(config) });
     const supervisor = (await User.findOne({ where: { email: 'supervisor@example.test' } }))!;

@@ -20,6 +20,7 @@ import { procedureReviewsRoutes } from '@/server/routes/procedure-reviews.routes
 import { usersRoutes } from '@/server/routes/users.routes';
 import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import type { PhotoStorage } from '@/server/lib/photo-storage';
+import type { LauncherStatus } from '@/server/services/health.service';
 import { assetsRoutes } from '@/server/routes/assets.routes';
 import { photosRoutes } from '@/server/routes/photos.routes';
 import { plantRoomsRoutes } from '@/server/routes/plant-rooms.routes';
@@ -27,6 +28,7 @@ import { sitesRoutes } from '@/server/routes/sites.routes';
 import { boardRoutes } from '@/server/routes/board.routes';
 import { teamRoutes } from '@/server/routes/team.routes';
 import { accountRoutes } from '@/server/routes/account.routes';
+import { connectionsRoutes } from '@/server/routes/connections.routes';
 import { meRoutes } from '@/server/routes/me.routes';
 import { visitsRoutes } from '@/server/routes/visits.routes';
 import { webStatic } from '@/server/lib/web-static';
@@ -36,6 +38,8 @@ export interface AppContext {
   config: ServerConfig;
   /** Photo files; made from config.storage when not given. */
   storage?: PhotoStorage;
+  /** The state of the private mariadbd when this process launched it, for /api/health. */
+  launcher?: () => LauncherStatus;
   /** Where request lines go; by default the server's logger (none under NODE_ENV=test). */
   requestLog?: Logger;
 }
@@ -91,6 +95,7 @@ export function createApp(ctx: AppContext) {
   api.use(sitesRoutes(ctx));
   api.use(plantRoomsRoutes(ctx));
   api.use(assetsRoutes(ctx));
+  api.use(connectionsRoutes(ctx));
   api.use(photosRoutes(ctx));
   api.use(calcRoutes(ctx));
   api.use(readingsRoutes(ctx));

@@ -6,7 +6,7 @@ import { telHref } from '@/components/board/board-vocabulary';
 import type { BoardRow } from '@/shared/types/board';
 
 /** The holder's name and, when the tag carries one, their phone number as a tap-to-call link. */
-export function HolderContact({ row }: { row: BoardRow }) {
+export function HolderContact({ row, testID }: { row: Pick<BoardRow, 'id' | 'author' | 'contactPhone'>; testID?: string }) {
   const phone = row.contactPhone.trim();
   return (
     <View style={{ gap: 2 }}>
@@ -18,7 +18,7 @@ export function HolderContact({ row }: { row: BoardRow }) {
           // A call must not also open the tag behind it.
           onPress={(e) => { e.stopPropagation?.(); void Linking.openURL(telHref(phone)); }}
           style={styles.call}
-          testID={`board-call-${row.id}`}
+          testID={testID ?? `board-call-${row.id}`}
         >
           <MaterialCommunityIcons name="phone" size={16} color={colors.brand} />
           <Text variant="small" style={styles.number}>{phone}</Text>

@@ -6,6 +6,8 @@ import { colors, layout, radius, space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
+import { EngineerHome } from '@/components/home/engineer-home';
+import { may } from '@/shared/rules/permissions';
 import type { User } from '@/shared/types/user';
 
 interface Action {
@@ -56,6 +58,7 @@ export function HomeContent({ user }: { user: User }) {
           </Link>
         ))}
       </View>
+      {may(user, 'recordVisits') ? <EngineerHome /> : null}
       {user.role !== 'viewer' ? (
         <Notice tone="caution" title="Before you work on any plant">
           Isoledger records what has been isolated or overridden, by whom and why. It does not make anything safe. Follow the site's safe isolation procedure, isolate every energy source, lock and tag physically, and prove the isolation before work. Gas work only by a competent person registered as local law requires.

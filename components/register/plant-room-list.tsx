@@ -20,6 +20,10 @@ export function PlantRoomList({ rooms }: { rooms: PlantRoom[] }) {
               <Text bold numberOfLines={1}>{r.name}</Text>
               {r.floorArea ? <Text variant="small" muted numberOfLines={1}>{r.floorArea}</Text> : null}
               <Text variant="small">{`${r.assetCount} ${r.assetCount === 1 ? 'item' : 'items'}`}</Text>
+              <View style={styles.live} testID={`plant-room-live-${r.id}`}>
+                <MaterialCommunityIcons name={r.liveTagCount ? 'tag-multiple' : 'tag-off-outline'} size={18} color={colors.ink} />
+                <Text variant="small" bold={r.liveTagCount > 0}>{r.liveTagCount ? `${r.liveTagCount} live ${r.liveTagCount === 1 ? 'tag' : 'tags'}` : 'No live tags'}</Text>
+              </View>
             </View>
             <MaterialCommunityIcons name="chevron-right" size={28} color={colors.inkMuted} />
           </Pressable>
@@ -33,5 +37,6 @@ const styles = StyleSheet.create({
   grid: { gap: space.sm },
   gridWide: { flexDirection: 'row', flexWrap: 'wrap' },
   tile: { flexDirection: 'row', alignItems: 'center', gap: space.md, backgroundColor: colors.surface, borderRadius: radius.lg, borderWidth: 1, borderColor: colors.line, padding: space.md, minHeight: layout.minTouch + 20 },
+  live: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
   tileWide: { flexBasis: 320, flexGrow: 1, maxWidth: '50%' },
 });

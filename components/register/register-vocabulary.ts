@@ -29,6 +29,12 @@ export const ASSET_TYPE_ICONS: Record<AssetType, IconName> = {
   'water-heater': 'storage-tank-outline',
   'control-panel': 'view-dashboard-variant-outline',
   'terminal-unit': 'fan',
+  'gas-supply': 'meter-gas-outline',
+  'electrical-supply': 'transmission-tower',
+  'water-supply': 'water-pump',
+  'distribution-board': 'view-grid-outline',
+  isolator: 'electric-switch',
+  pipework: 'pipe',
   other: 'cube-outline',
 };
 
@@ -46,6 +52,11 @@ export const ATTRIBUTE_META: Record<string, { label: string; unit?: string; hint
   designPressureBar: { label: 'Design pressure', unit: 'bar' },
   fillPressureBar: { label: 'Cold fill pressure', unit: 'bar' },
   setpointC: { label: 'Stored water setpoint', unit: '°C' },
+  isolation: { label: 'Isolates', hint: 'Only a valve recorded as isolating is offered as an isolation point.' },
+  isolatorForm: { label: 'Form of isolator' },
+  meterPoint: { label: 'Meter or supply point reference' },
+  supplyNumber: { label: 'Supply number' },
+  ways: { label: 'Number of ways' },
 };
 
 export const OPTION_LABELS: Record<string, string> = {
@@ -68,6 +79,12 @@ export const OPTION_LABELS: Record<string, string> = {
   '24v-on-off': '24 V on/off',
   '230v-on-off': '230 V on/off',
   '3-point': '3-point (raise/lower)',
+  motorised: 'Motorised isolating valve',
+  none: 'Control valve (does not isolate)',
+  isolator: 'Isolator',
+  'switch-disconnector': 'Switch-disconnector',
+  'fused-spur': 'Fused spur',
+  'plug-and-socket': 'Plug and socket',
 };
 
 export const optionLabel = (value: string) => OPTION_LABELS[value] ?? value;

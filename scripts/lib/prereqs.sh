@@ -1,11 +1,14 @@
 # Shared by scripts/start.sh and scripts/test.sh: installs what Isoledger needs on a fresh Debian machine.
 
-# ensure_debian COMMAND PACKAGE [COMMAND PACKAGE ...]: installs each PACKAGE whose COMMAND is missing.
+# ensure_debian COMMAND PACKAGE [COMMAND PACKAGE ...]: installs each PACKAGE whose COMMAND is missing
+# (COMMAND may also be an absolute path to a file the package installs, e.g. a library).
 ensure_debian() {
   local missing=()
   while [ "$#" -gt 0 ]; do
     local cmd="$1" pkg="$2"; shift 2
-    if ! command -v "$cmd" >/dev/null 2>&1 && [ ! -x "/usr/sbin/$cmd" ] && [ ! -x "/usr/bin/$cmd" ]; then
+    if [ "${cmd#/}" != "$cmd" ]; then
+      [ -e "$cmd" ] || missing+=("$pkg")
+    elif ! command -v "$cmd" >/dev/null 2>&1 && [ ! -x "/usr/sbin/$cmd" ] && [ ! -x "/usr/bin/$cmd" ]; then
       missing+=("$pkg")
     fi
   done

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ValidationError } from 'yup';
 import { HttpError } from '@/server/lib/http-error';
+import { isDatabaseUnavailable } from '@/server/db-errors';
 import { logger, redactUrl } from '@/server/lib/logger';
 import { BusyError } from '@/server/lib/work-limit';
 import { fieldErrors } from '@/shared/schemas/field-errors';
@@ -27,6 +28,12 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     const message = err.type === 'entity.too.large' ? 'The request is too large.' : err.type === 'entity.parse.failed' ? 'The request body is not valid JSON.' : 'The request could not be understood.';
     const code: ErrorCode = err.type === 'entity.too.large' || err.type === 'entity.parse.failed' ? err.type : 'bad-request';
     res.status(status).json({ error: { code, message } } satisfies ApiErrorBody);
+    return;
+  }
+  // The database down, restarting or stalled: the client may retry shortly (its idempotency key makes that safe).
+  if (isDatabaseUnavailable(err)) {
+    logger.warn({ err: { message: err.message, name: err.name }, method: req.method, url: redactUrl(req.originalUrl) }, 'database unavailable');
+    res.set('Retry-After', '5').status(503).json({ error: { code: 'unavailable', message: 'The database is not answering just now. Please try again in a few seconds.' } } satisfies ApiErrorBody);
     return;
   }
   logger.error({ err, method: req.method, url: redactUrl(req.originalUrl) }, 'unhandled error');

@@ -1,21 +1,13 @@
 import { Router } from 'express';
 import type { AppContext } from '@/server/app';
+import { checkHealth } from '@/server/services/health.service';
 
-export function healthRoutes({ sequelize }: AppContext) {
+export function healthRoutes({ sequelize, launcher }: AppContext) {
   const router = Router();
   router.get('/health', async (_req, res) => {
-    let timer: ReturnType<typeof setTimeout> | undefined;
-    try {
-      await Promise.race([
-        sequelize.query('SELECT 1'),
-        new Promise((_, reject) => { timer = setTimeout(() => reject(new Error('database check timed out')), 3000); }),
-      ]);
-      res.json({ ok: true, db: 'up' });
-    } catch {
-      res.status(503).json({ ok: false, db: 'down' });
-    } finally {
-      clearTimeout(timer);
-    }
+    const health = await checkHealth(sequelize, launcher);
+    if (!health.ok) res.set('Retry-After', '5');
+    res.status(health.ok ? 200 : 503).json(health);
   });
   return router;
 }

@@ -8,6 +8,7 @@ import { readConfig } from '@/server/config';
 import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import type { PhotoStorage } from '@/server/lib/photo-storage';
 import { seedDemoRegister } from '@/server/seed/demo-register';
+import { seedDemoConnections } from '@/server/seed/demo-connections';
 import { seedDemoReadings } from '@/server/seed/demo-readings';
 import { seedDemoTags } from '@/server/seed/demo-tags';
 import type { Role } from '@/shared/rules/roles';
@@ -38,6 +39,7 @@ export async function seedDemo(sequelize: Sequelize, opts: { bcryptCost?: number
       const authors = { supervisor: byEmail('supervisor@example.test'), engineer: byEmail('engineer@example.test'), engineer2: byEmail('engineer2@example.test') };
       if (!authors.supervisor || !authors.engineer || !authors.engineer2) return false;
       const seeded = await seedDemoRegister({ organisationId, authors, storage, transaction });
+      if (seeded) await seedDemoConnections({ organisationId, createdBy: authors.supervisor.id, transaction });
       await seedDemoReadings({ organisationId, authors, transaction });
       if (seeded) await seedDemoTags({ organisationId, engineer: authors.engineer, engineer2: authors.engineer2, supervisor: authors.supervisor, transaction });
       const viewer = users.find((u) => u.email === 'viewer@example.test');

@@ -8,6 +8,7 @@ import { Asset } from '@/server/models/asset.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { Site } from '@/server/models/site.model';
 import { User } from '@/server/models/user.model';
+import { assertMayChangeSite } from '@/server/services/connections.service';
 import { buildAssetListSql, type AssetListFilters } from '@/server/services/asset-search';
 import { assetAsInput, assetColumns, validateAsset, type ValidAsset } from '@/server/services/asset-validation';
 import { firstAssetPhotoIds, photosOf } from '@/server/services/photos.service';
@@ -107,7 +108,10 @@ export async function updateAsset(actor: AuthUser, id: number, patch: Record<str
   const given = Object.fromEntries(Object.entries(patch).filter(([, value]) => value !== undefined));
   const merged: Record<string, unknown> = { ...assetAsInput(asset), ...given };
   // Moved to another site without naming a room: it leaves its old site's room.
-  if (given.siteId !== undefined && given.siteId !== asset.siteId && given.plantRoomId === undefined) merged.plantRoomId = null;
+  if (given.siteId !== undefined && given.siteId !== asset.siteId) {
+    await assertMayChangeSite(asset.id);
+    if (given.plantRoomId === undefined) merged.plantRoomId = null;
+  }
   const v = await validateAsset(merged);
   await checkPlacement(actor, v, asset.id);
   asset.set(assetColumns(v));

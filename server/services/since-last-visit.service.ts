@@ -16,11 +16,12 @@ export async function sinceLastVisit(actor: AuthUser, place: { siteId: number } 
   const room = 'plantRoomId' in place ? await findPlantRoom(actor, place.plantRoomId) : null;
   const site = await findSite(actor, room ? room.siteId : (place as { siteId: number }).siteId);
   const last = await Visit.findOne({ where: { userId: actor.id, siteId: site.id, endedAt: { [Op.ne]: null } }, order: [['endedAt', 'DESC']] });
-  if (!last?.endedAt) return { since: null, raised: [], cleared: [], notes: [], flaggedReadings: [] };
+  if (!last?.endedAt) return { since: null, timeZone: site.timeZone, raised: [], cleared: [], notes: [], flaggedReadings: [] };
   const window = { organisationId: actor.organisationId, siteId: site.id, plantRoomId: room?.id, from: last.endedAt };
   const [events, flaggedReadings] = await Promise.all([tagActivity(window), readingActivity(window, { flaggedOnly: true })]);
   return {
     since: last.endedAt.toISOString(),
+    timeZone: site.timeZone,
     raised: events.filter((e) => e.type === 'raised'),
     cleared: events.filter((e) => CLEARED.has(e.type)),
     notes: events.filter((e) => NOTES.has(e.type)),

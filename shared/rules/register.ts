@@ -1,5 +1,10 @@
 /** Plant item types, energy sources and their labels: the register's vocabulary, shared by client and server. */
-export const ASSET_TYPES = ['boiler', 'pump', 'actuator', 'valve', 'vessel', 'pressurisation-unit', 'water-heater', 'control-panel', 'terminal-unit', 'other'] as const;
+export const ASSET_TYPES = [
+  'boiler', 'pump', 'actuator', 'valve', 'vessel', 'pressurisation-unit', 'water-heater', 'control-panel', 'terminal-unit',
+  // Supplies and where they are isolated, so the register can say how items are connected (shared/rules/connections.ts).
+  'gas-supply', 'electrical-supply', 'water-supply', 'distribution-board', 'isolator', 'pipework',
+  'other',
+] as const;
 export type AssetType = (typeof ASSET_TYPES)[number];
 
 export const ASSET_TYPE_LABELS: Record<AssetType, string> = {
@@ -12,6 +17,12 @@ export const ASSET_TYPE_LABELS: Record<AssetType, string> = {
   'water-heater': 'Water heater / calorifier',
   'control-panel': 'Control panel',
   'terminal-unit': 'Fan coil / terminal unit',
+  'gas-supply': 'Incoming gas supply / meter',
+  'electrical-supply': 'Electrical intake',
+  'water-supply': 'Incoming mains water',
+  'distribution-board': 'Distribution board',
+  isolator: 'Isolator / switch-disconnector',
+  pipework: 'Pipework / header',
   other: 'Other',
 };
 

@@ -1,4 +1,5 @@
 import * as yup from 'yup';
+import { ISOLATOR_FORMS, VALVE_ISOLATION } from '@/shared/rules/connections';
 import { ASSET_TYPES, ENERGY_SOURCES, type AssetType } from '@/shared/rules/register';
 
 const text = (max: number) => yup.string().trim().max(max, `At most ${max} characters.`).default('');
@@ -74,6 +75,8 @@ export const attributeSchemas: Record<AssetType, yup.AnyObjectSchema> = {
   valve: yup.object({
     normalPosition: yup.string().oneOf(['normally-open', 'normally-closed', '']).default(''),
     controlSignal: yup.string().oneOf(['manual', '0-10v', '2-10v', '4-20ma', '24v-on-off', '230v-on-off', '3-point', 'other', '']).default(''),
+    // Only a valve recorded as isolating is offered as an isolation point; a control valve is not one.
+    isolation: yup.string().oneOf([...VALVE_ISOLATION, '']).default(''),
   }),
   vessel: yup.object({
     capacityL: optionalNumber(0, 100000, 'L'),
@@ -89,6 +92,12 @@ export const attributeSchemas: Record<AssetType, yup.AnyObjectSchema> = {
   }),
   'control-panel': yup.object({}),
   'terminal-unit': yup.object({}),
+  'gas-supply': yup.object({ meterPoint: text(60) }),
+  'electrical-supply': yup.object({ supplyNumber: text(60) }),
+  'water-supply': yup.object({ meterPoint: text(60) }),
+  'distribution-board': yup.object({ ways: optionalNumber(1, 200, 'ways') }),
+  isolator: yup.object({ isolatorForm: yup.string().oneOf([...ISOLATOR_FORMS, '']).default('') }),
+  pipework: yup.object({ capacityL: optionalNumber(0, 100000, 'L') }),
   other: yup.object({}),
 };
 

@@ -74,6 +74,8 @@ export interface Visit {
 export interface SinceLastVisit {
   /** When the last visit ended; null when the person has not visited before. */
   since: string | null;
+  /** The site's time zone, for showing the times as they were on site. */
+  timeZone: string;
   raised: TagActivity[];
   cleared: TagActivity[];
   notes: TagActivity[];

@@ -1,12 +1,16 @@
 import crypto from 'node:crypto';
-import mariadb from 'mariadb';
 import type { Sequelize } from 'sequelize';
 import { inject } from 'vitest';
-import { createSequelize, migrate } from '@/server/db';
+import { adminConnection } from '@/scripts/lib/mariadb';
+import { provisionDatabase } from '@/scripts/lib/local-db';
+import { createSequelize, prepareDatabase } from '@/server/db';
 
 export interface TestDatabase {
   sequelize: Sequelize;
+  /** The server's own restricted account, as the running product connects. */
   url: string;
+  /** The migration owner's account. */
+  ownerUrl: string;
   name: string;
   port: number;
   /** Runs raw SQL as root on this test database (for checks the application user could not make). */
@@ -14,34 +18,40 @@ export interface TestDatabase {
   drop: () => Promise<void>;
 }
 
-/** A fresh, migrated database for one test file on the run's throwaway MariaDB. */
+/**
+ * A fresh database for one test file on the run's throwaway MariaDB, set up as the product runs: migrated by an
+ * owner account, then used through the server's restricted account.
+ */
 export async function createTestDatabase(): Promise<TestDatabase> {
   const port = inject('dbPort');
-  const name = `t_${crypto.randomBytes(6).toString('hex')}`;
-  const root = await mariadb.createConnection({ host: '127.0.0.1', port, user: 'root' });
-  await root.query(`CREATE DATABASE ${name} CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
-  await root.end();
-  const url = `mariadb://root@127.0.0.1:${port}/${name}`;
-  const sequelize = createSequelize(url);
-  await migrate(sequelize);
+  const socketPath = inject('dbSocket');
+  const suffix = crypto.randomBytes(6).toString('hex');
+  const name = `t_${suffix}`;
+  const password = () => crypto.randomBytes(18).toString('base64url');
+  const owner = { user: `o_${suffix}`, password: password() };
+  const server = { user: `s_${suffix}`, password: password() };
+  const { ownerUrl, serverUrl } = await provisionDatabase({ port, socketPath }, { database: name, owner, server });
+  await prepareDatabase(ownerUrl, serverUrl);
+  const sequelize = createSequelize(serverUrl);
+  const asRoot = async <T,>(sql: string, values?: unknown[], database?: string): Promise<T> => {
+    const conn = await adminConnection(socketPath, database);
+    try {
+      return (await conn.query(sql, values)) as T;
+    } finally {
+      await conn.end();
+    }
+  };
   return {
     sequelize,
-    url,
+    url: serverUrl,
+    ownerUrl,
     name,
     port,
-    rootQuery: async (sql, values) => {
-      const conn = await mariadb.createConnection({ host: '127.0.0.1', port, user: 'root', database: name });
-      try {
-        return await conn.query(sql, values);
-      } finally {
-        await conn.end();
-      }
-    },
+    rootQuery: (sql, values) => asRoot(sql, values, name),
     drop: async () => {
       await sequelize.close();
-      const conn = await mariadb.createConnection({ host: '127.0.0.1', port, user: 'root' });
-      await conn.query(`DROP DATABASE IF EXISTS ${name}`);
-      await conn.end();
+      await asRoot(`DROP DATABASE IF EXISTS ${name}`);
+      await asRoot(`DROP USER IF EXISTS '${owner.user}'@'127.0.0.1', '${server.user}'@'127.0.0.1'`);
     },
   };
 }

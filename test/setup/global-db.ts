@@ -7,6 +7,8 @@ import { freePort, startPrivateMariaDb } from '@/scripts/lib/mariadb';
 declare module 'vitest' {
   export interface ProvidedContext {
     dbPort: number;
+    /** The throwaway server's unix socket, through which root logs in (socket authentication). */
+    dbSocket: string;
   }
 }
 
@@ -20,6 +22,7 @@ export default async function setup(project: TestProject) {
   const db = await startPrivateMariaDb({ dataDir, port });
   process.env.TEST_DB_PORT = String(port);
   project.provide('dbPort', port);
+  project.provide('dbSocket', db.socketPath);
   return async () => {
     await db.stop();
     fs.rmSync(dataDir, { recursive: true, force: true });

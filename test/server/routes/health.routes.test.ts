@@ -5,8 +5,9 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '@/server/app';
 import { readConfig } from '@/server/config';
-import { createSequelize } from '@/server/db';
+import { createSequelize, prepareDatabase } from '@/server/db';
 import { freePort, startPrivateMariaDb, type PrivateMariaDb } from '@/scripts/lib/mariadb';
+import { localAccounts, provisionDatabase } from '@/scripts/lib/local-db';
 
 // This file stops and restarts a database, so it uses a private MariaDB of its own, not the shared test server.
 let dataDir: string;
@@ -16,7 +17,7 @@ let db: PrivateMariaDb;
 beforeAll(async () => {
   dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'isoledger-health-'));
   port = await freePort();
-  db = await startPrivateMariaDb({ dataDir, port });
+  db = await startPrivateMariaDb({ dataDir, port, restart: false });
 });
 afterAll(async () => {
   await db.stop();
@@ -25,7 +26,9 @@ afterAll(async () => {
 
 describe('GET /api/health', () => {
   it('reports up, 503 while the database is stopped, and up again after it restarts', async () => {
-    const sequelize = createSequelize(`mariadb://root@127.0.0.1:${port}/mysql`);
+    const urls = await provisionDatabase(db, localAccounts(dataDir));
+    await prepareDatabase(urls.ownerUrl, urls.serverUrl);
+    const sequelize = createSequelize(urls.serverUrl);
     const app = createApp({ sequelize, config: readConfig({}, { jwtSecret: 'x', webDir: null }) });
     try {
       const up = await request(app).get('/api/health');
@@ -37,7 +40,7 @@ describe('GET /api/health', () => {
       expect(down.status).toBe(503);
       expect(down.body).toEqual({ ok: false, db: 'down' });
 
-      db = await startPrivateMariaDb({ dataDir, port });
+      db = await startPrivateMariaDb({ dataDir, port, restart: false });
       let again = await request(app).get('/api/health');
       // The pool may hand out one stale connection first; it must recover on its own within a few checks.
       for (let i = 0; i < 5 && again.status !== 200; i++) again = await request(app).get('/api/health');

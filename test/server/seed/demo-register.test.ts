@@ -43,7 +43,7 @@ describe('demo register seed', () => {
     }
   });
 
-  it('seeds at least 40 items covering all ten types, with valid unique label codes, some overdue and some not', async () => {
+  it('seeds at least 40 items covering every item type, with valid unique label codes, some overdue and some not', async () => {
     const assets = await Asset.findAll();
     expect(assets.length).toBeGreaterThanOrEqual(40);
     expect(new Set(assets.map((a) => a.type))).toEqual(new Set(ASSET_TYPES));

@@ -21,6 +21,8 @@ import { ASSET_TYPE_ICONS } from '@/components/register/register-vocabulary';
 import { errorMessage } from '@/hooks/api/request';
 import { useAddAssetPhotoMutation, useArchiveAssetMutation, useAssetQuery } from '@/hooks/api/use-assets';
 import { usePermissions } from '@/hooks/auth/use-permissions';
+import { useNow } from '@/components/tags/use-now';
+import { VisitBanner } from '@/components/visits/visit-banner';
 import { ASSET_TYPE_LABELS } from '@/shared/rules/register';
 
 export default function AssetScreen() {
@@ -31,6 +33,7 @@ export default function AssetScreen() {
   const addPhoto = useAddAssetPhotoMutation(id);
   const archive = useArchiveAssetMutation();
   const [confirming, setConfirming] = useState(false);
+  const now = useNow();
   return (
     <QueryScreen query={asset} title="Plant item">
       {(a) => {
@@ -56,6 +59,7 @@ export default function AssetScreen() {
             </View>
             {a.archived ? <Notice tone="info" word="Archived">This item is no longer in service. Its record is kept for history.</Notice> : null}
             <AssetStateSlot asset={a} />
+            {a.archived ? null : <VisitBanner siteId={a.siteId} siteName={a.siteName} next={`/assets/${id}`} now={now} />}
             <AssetDetails asset={a} />
             <AssetReadingsSection asset={a} />
             <Card>

@@ -17,6 +17,11 @@ import { errorMessage } from '@/hooks/api/request';
 import { useAssetsQuery } from '@/hooks/api/use-assets';
 import { useAddPlantRoomPhotoMutation, usePlantRoomQuery } from '@/hooks/api/use-plant-rooms';
 import { usePermissions } from '@/hooks/auth/use-permissions';
+import { useSinceLastVisitQuery } from '@/hooks/api/use-visits';
+import { LiveTagsPanel } from '@/components/places/live-tags-panel';
+import { SinceLastVisitCard } from '@/components/places/since-last-visit-card';
+import { useNow } from '@/components/tags/use-now';
+import { VisitBanner } from '@/components/visits/visit-banner';
 
 export default function PlantRoomScreen() {
   const id = Number(useLocalSearchParams<{ id: string }>().id);
@@ -25,6 +30,8 @@ export default function PlantRoomScreen() {
   const room = usePlantRoomQuery(id);
   const items = useAssetsQuery({ plantRoomId: id, sort: 'plantId', pageSize: 200 });
   const addPhoto = useAddPlantRoomPhotoMutation(id);
+  const since = useSinceLastVisitQuery('plant-room', id);
+  const now = useNow();
   return (
     <QueryScreen query={room} title="Plant room">
       {(r) => (
@@ -39,6 +46,9 @@ export default function PlantRoomScreen() {
           }
         >
           <Breadcrumbs trail={[{ label: 'Register', href: '/assets' }, { label: r.siteName, href: `/sites/${r.siteId}` }]} />
+          <LiveTagsPanel tags={r.liveTags ?? []} now={now} place={r.name} />
+          <VisitBanner siteId={r.siteId} siteName={r.siteName} next={`/plant-rooms/${id}`} now={now} />
+          {since.data ? <SinceLastVisitCard data={since.data} now={now} /> : null}
           <SafetyLocationsPanel safety={r.safety} />
           <Card>
             <Text variant="title">Access</Text>

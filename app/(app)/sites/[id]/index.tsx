@@ -16,6 +16,13 @@ import { errorMessage } from '@/hooks/api/request';
 import { useSitePlantRoomsQuery } from '@/hooks/api/use-plant-rooms';
 import { useSiteQuery } from '@/hooks/api/use-sites';
 import { usePermissions } from '@/hooks/auth/use-permissions';
+import { useSinceLastVisitQuery } from '@/hooks/api/use-visits';
+import { LiveTagsPanel } from '@/components/places/live-tags-panel';
+import { SinceLastVisitCard } from '@/components/places/since-last-visit-card';
+import { zoneIfDifferent } from '@/components/places/zone';
+import { useNow } from '@/components/tags/use-now';
+import { SiteVisitsCard } from '@/components/visits/site-visits-card';
+import { VisitBanner } from '@/components/visits/visit-banner';
 
 export default function SiteScreen() {
   const id = Number(useLocalSearchParams<{ id: string }>().id);
@@ -23,6 +30,8 @@ export default function SiteScreen() {
   const perms = usePermissions();
   const site = useSiteQuery(id);
   const rooms = useSitePlantRoomsQuery(id);
+  const since = useSinceLastVisitQuery('site', id);
+  const now = useNow();
   return (
     <QueryScreen query={site} title="Site">
       {(s) => (
@@ -37,6 +46,9 @@ export default function SiteScreen() {
           }
         >
           <Breadcrumbs trail={[{ label: 'Register', href: '/assets' }]} />
+          <VisitBanner siteId={id} siteName={s.name} now={now} />
+          <LiveTagsPanel tags={s.liveTags ?? []} now={now} place={s.name} />
+          {since.data ? <SinceLastVisitCard data={since.data} now={now} /> : null}
           <View style={{ gap: space.sm }}>
             <View style={{ flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap' }}>
               <Text variant="title" style={{ flex: 1 }}>{`Plant rooms (${s.plantRoomCount})`}</Text>
@@ -45,6 +57,7 @@ export default function SiteScreen() {
             {rooms.isError ? <Notice tone="danger" word="Cannot load">{errorMessage(rooms.error)}</Notice> : null}
             {rooms.data ? <PlantRoomList rooms={rooms.data.items} /> : rooms.isPending ? <LoadingView /> : null}
           </View>
+          <SiteVisitsCard siteId={id} now={now} />
           {s.assetCount ? (
             <Card>
               <Text variant="title">QR labels for this site</Text>
@@ -58,7 +71,7 @@ export default function SiteScreen() {
               twoColumns
               rows={[
                 ['Address', s.address],
-                ['Time zone', s.timeZone],
+                ...(zoneIfDifferent(s.timeZone) ? [['Time zone', zoneIfDifferent(s.timeZone)] as [string, string]] : []),
                 ['Client contact', s.clientContactName],
                 ['Contact phone', s.clientContactPhone],
                 ['Contact e-mail', s.clientContactEmail],
