@@ -6,7 +6,7 @@ import { telHref } from '@/components/board/board-vocabulary';
 import type { BoardRow } from '@/shared/types/board';
 
 /** The holder's name and, when the tag carries one, their phone number as a tap-to-call link. */
-export function HolderContact({ row, testID }: { row: Pick<BoardRow, 'id' | 'author' | 'contactPhone'>; testID?: string }) {
+export function HolderContact({ row, testID }: { row: Pick<BoardRow, 'id' | 'holder' | 'contactPhone'>; testID?: string }) {
   const phone = row.contactPhone.trim();
   return (
     <View style={{ gap: 2 }}>
