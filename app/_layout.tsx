@@ -1,12 +1,12 @@
 import { AtkinsonHyperlegible_400Regular, AtkinsonHyperlegible_700Bold } from '@expo-google-fonts/atkinson-hyperlegible';
 import { MaterialCommunityIcons } from '@expo/vector-icons';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { useFonts } from 'expo-font';
 import { Slot } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
-import { useState } from 'react';
+import { useEffect } from 'react';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
-import { RequestError } from '@/hooks/api/request';
+import { AppQueryProvider } from '@/components/offline/app-query-provider';
+import { registerServiceWorker } from '@/hooks/offline/register-service-worker';
 import { AuthProvider } from '@/hooks/auth/auth-provider';
 import { LoadingView } from '@/components/ui/loading-view';
 
@@ -21,25 +21,15 @@ export default function RootLayout() {
   });
   void AtkinsonHyperlegible_400Regular;
   void AtkinsonHyperlegible_700Bold;
-  const [queryClient] = useState(
-    () =>
-      new QueryClient({
-        defaultOptions: {
-          queries: {
-            // A 4xx will not get better by asking again.
-            retry: (count, err) => !(err instanceof RequestError && err.status >= 400 && err.status < 500) && count < 2,
-          },
-        },
-      }),
-  );
+  useEffect(registerServiceWorker, []);
   return (
     <SafeAreaProvider>
-      <QueryClientProvider client={queryClient}>
+      <AppQueryProvider>
         <AuthProvider>
           <StatusBar style="dark" />
           {fontsLoaded ? <Slot /> : <LoadingView />}
         </AuthProvider>
-      </QueryClientProvider>
+      </AppQueryProvider>
     </SafeAreaProvider>
   );
 }

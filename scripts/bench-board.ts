@@ -12,12 +12,12 @@ import { createApp } from '@/server/app';
 import { readConfig } from '@/server/config';
 import { createSequelize, prepareDatabase } from '@/server/db';
 import { createPhotoStorage } from '@/server/lib/create-photo-storage';
-import { Asset } from '@/server/models/asset.model';
-import { Tag } from '@/server/models/tag.model';
 import { User } from '@/server/models/user.model';
 import { UserSiteAccess } from '@/server/models/user-site-access.model';
 import { DEMO_PASSWORD, seedDemo } from '@/server/seed/demo';
-import { getBoard, readBoardFilters } from '@/server/services/board.service';
+import { getBoard } from '@/server/services/board.service';
+import { boardQuery } from '@/shared/schemas/queries';
+import { seedBenchTags } from '@/scripts/lib/bench-tags';
 import { freePort, startPrivateMariaDb } from '@/scripts/lib/mariadb';
 import { localAccounts, provisionDatabase } from '@/scripts/lib/local-db';
 
@@ -26,31 +26,6 @@ const CLEARED = Number(process.env.BENCH_CLEARED ?? 20000);
 const REQUESTS = Number(process.env.BENCH_REQUESTS ?? 60);
 const BURST = Number(process.env.BENCH_BURST ?? 25);
 const say = (line: string) => console.log(`[bench-board] ${line}`);
-
-async function seedTags(organisationId: number) {
-  const assets = await Asset.findAll({ where: { organisationId } });
-  const people = await User.findAll({ where: { organisationId } });
-  const holders = people.filter((p) => p.role !== 'viewer');
-  const now = Date.now();
-  const hour = 3600_000;
-  const make = (i: number, status: 'live' | 'cleared') => {
-    const holder = holders[i % holders.length];
-    // Expiries spread from two days ago to ten days ahead, so every board state is well represented.
-    const expiresAt = new Date(now + ((i * 7919) % (12 * 24) - 48) * hour);
-    return {
-      organisationId, assetId: assets[i % assets.length].id, kind: i % 3 === 0 ? 'override' as const : 'isolation' as const, status,
-      reason: `Bench tag ${i}: ${i % 2 ? 'seal replacement on the flow side' : 'controls fault finding'}`, raisedById: holder.id, holderId: holder.id,
-      raisedAt: new Date(expiresAt.getTime() - 30 * hour), expiresAt, contactPhone: '+44 7700 900199', lockNumber: `L-${i}`,
-      energySources: [], normalState: '', leftState: '', idempotencyKey: null,
-      ...(status === 'cleared' ? { clearedAt: new Date(now - hour), clearedById: holder.id, clearance: 'normal' as const } : {}),
-    };
-  };
-  for (let i = 0; i < LIVE + CLEARED; i += 1000) {
-    const rows = Array.from({ length: Math.min(1000, LIVE + CLEARED - i) }, (_, k) => make(i + k, i + k < LIVE ? 'live' : 'cleared'));
-    await Tag.bulkCreate(rows);
-  }
-  return { assets: assets.length, sites: new Set(assets.map((a) => a.siteId)).size };
-}
 
 const stats = (ms: number[]) => {
   const s = [...ms].sort((a, b) => a - b);
@@ -70,7 +45,7 @@ async function main() {
     await seedDemo(sequelize, { storage: createPhotoStorage(config) });
     const supervisor = (await User.findOne({ where: { email: 'supervisor@example.test' } }))!;
     const viewer = (await User.findOne({ where: { email: 'viewer@example.test' } }))!;
-    const size = await seedTags(supervisor.organisationId);
+    const size = await seedBenchTags(supervisor.organisationId, LIVE, CLEARED);
     const siteIds = (await sequelize.query<{ id: number }>('SELECT id FROM sites ORDER BY id', { type: QueryTypes.SELECT })).map((r) => r.id);
     await UserSiteAccess.bulkCreate(siteIds.slice(0, Math.max(1, Math.floor(siteIds.length / 2))).map((siteId) => ({ userId: viewer.id, siteId, grantedBy: null })));
     say(`demo data + ${LIVE} live and ${CLEARED} cleared tags over ${size.assets} items on ${size.sites} sites`);
@@ -105,7 +80,7 @@ async function main() {
     const inProcess: number[] = [];
     for (let i = 0; i < REQUESTS; i += 1) {
       const t1 = performance.now();
-      await getBoard(sequelize, actor, readBoardFilters({}), { page: 1, pageSize: 50, offset: 0 });
+      await getBoard(sequelize, actor, boardQuery.validateSync({}), { page: 1, pageSize: 50, offset: 0 });
       inProcess.push(performance.now() - t1);
     }
     say(`${'default view, service only (no HTTP)'.padEnd(34)} ${stats(inProcess)}`);

@@ -1,3 +1,6 @@
 import { buildWeb } from '@/scripts/lib/web-build';
 
-buildWeb((line) => console.log(`[isoledger] ${line}`));
+void buildWeb((line) => console.log(`[isoledger] ${line}`)).catch((err: unknown) => {
+  console.error(err);
+  process.exit(1);
+});

@@ -6,7 +6,9 @@ import { QueryTypes, type Sequelize } from 'sequelize';
  * A new table of history (events, proofs, acknowledgements, reviews, visit records) is added here, and
  * `grantServerPrivileges` gives it these rights after the next migration.
  */
-export const APPEND_ONLY_TABLES = ['audit_events', 'tag_events', 'tag_points', 'readings', 'retired_labels', 'digest_runs', 'visit_decisions'];
+export const APPEND_ONLY_TABLES = [
+  'audit_events', 'tag_events', 'tag_points', 'tag_proofs', 'procedure_reviews', 'readings', 'retired_labels', 'digest_runs', 'visit_decisions',
+];
 
 /** Tables the server reads but never writes. */
 export const READ_ONLY_TABLES = ['schema_migrations'];

@@ -1,6 +1,7 @@
 import { Slot, usePathname, useRouter } from 'expo-router';
 import { useEffect } from 'react';
 import { AppShell } from '@/components/nav/app-shell';
+import { PendingBanner } from '@/components/offline/pending-actions';
 import { Button } from '@/components/ui/button';
 import { LoadingView } from '@/components/ui/loading-view';
 import { Notice } from '@/components/ui/notice';
@@ -8,12 +9,14 @@ import { Screen } from '@/components/ui/screen';
 import { errorMessage } from '@/hooks/api/request';
 import { useMeQuery } from '@/hooks/api/use-auth';
 import { useAuth } from '@/hooks/auth/auth-provider';
+import { useOutboxSender } from '@/hooks/offline/use-outbox';
 
 export default function AppLayout() {
   const { ready, token } = useAuth();
   const pathname = usePathname();
   const me = useMeQuery();
   const router = useRouter();
+  useOutboxSender();
   const signedOut = ready && !token;
   useEffect(() => {
     if (!signedOut) return;
@@ -32,6 +35,7 @@ export default function AppLayout() {
   }
   return (
     <AppShell user={me.data}>
+      <PendingBanner />
       <Slot />
     </AppShell>
   );

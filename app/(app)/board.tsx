@@ -15,11 +15,11 @@ import { useBoardHolders } from '@/components/board/use-board-holders';
 import { BoardPrintStyles } from '@/components/board/print-styles';
 import { useNow } from '@/components/tags/use-now';
 import { errorMessage } from '@/hooks/api/request';
-import { useMeQuery } from '@/hooks/api/use-auth';
 import { useBoardQuery } from '@/hooks/api/use-board';
+import { usePermissions } from '@/hooks/auth/use-permissions';
 import { useSitesQuery } from '@/hooks/api/use-sites';
 import { useDebouncedValue } from '@/hooks/use-debounced-value';
-import { DEFAULT_BOARD_SORT, mayViewBoard } from '@/shared/rules/board';
+import { DEFAULT_BOARD_SORT } from '@/shared/rules/board';
 import type { BoardQuery } from '@/shared/types/board';
 
 const TABLE_PAGE = 50;
@@ -27,7 +27,7 @@ const PHONE_PAGE = 20;
 
 export default function BoardScreen() {
   const { isWide } = useBreakpoints();
-  const me = useMeQuery().data;
+  const { actor, may } = usePermissions();
   const [filters, setFilters] = useState<BoardFilterState>(NO_BOARD_FILTERS);
   const [sort, setSort] = useState<SortState>({ key: DEFAULT_BOARD_SORT, dir: 'asc' });
   const [page, setPage] = useState(1);
@@ -55,7 +55,7 @@ export default function BoardScreen() {
     setPhoneCount(PHONE_PAGE);
   };
 
-  if (me && !mayViewBoard(me.role)) {
+  if (actor && !may('viewBoard')) {
     return (
       <Screen title="Live tags board">
         <Notice tone="info" word="Not for your role">The board is for supervisors, admins and viewers. Your own tags are on each plant item’s record.</Notice>
@@ -63,7 +63,7 @@ export default function BoardScreen() {
     );
   }
 
-  const readOnly = me?.role === 'viewer';
+  const readOnly = !!actor && !may('actOnBoard');
   const data = board.data;
   return (
     <Screen

@@ -7,6 +7,7 @@ import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { MySettingsForm } from '@/components/account/my-settings-form';
+import { SchemeChoiceCard } from '@/components/account/scheme-choice';
 import { errorMessage } from '@/hooks/api/request';
 import { useMySettingsQuery } from '@/hooks/api/use-account';
 import { useMeQuery, useSignOutMutation } from '@/hooks/api/use-auth';
@@ -32,6 +33,7 @@ export default function SettingsScreen() {
         </Card>
         {settings.isError ? <Notice tone="danger" word="Cannot load">{errorMessage(settings.error)}</Notice> : null}
         {settings.data ? <MySettingsForm settings={settings.data} /> : settings.isPending ? <LoadingView /> : null}
+        <SchemeChoiceCard />
         <Button title="Sign out" variant="secondary" busy={signOut.isPending} onPress={() => signOut.mutate()} testID="sign-out" />
       </View>
     </Screen>

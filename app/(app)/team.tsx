@@ -10,13 +10,13 @@ import { AuditLog } from '@/components/team/audit-log';
 import { InviteForm } from '@/components/team/invite-form';
 import { MemberCard } from '@/components/team/member-card';
 import { errorMessage } from '@/hooks/api/request';
-import { useMeQuery } from '@/hooks/api/use-auth';
 import { useSitesQuery } from '@/hooks/api/use-sites';
 import { useTeamQuery } from '@/hooks/api/use-team';
+import { usePermissions } from '@/hooks/auth/use-permissions';
 
 export default function TeamScreen() {
-  const me = useMeQuery().data;
-  const isAdmin = me?.role === 'admin';
+  const { actor: me, may } = usePermissions();
+  const isAdmin = may('administerTeam');
   const { isWide } = useBreakpoints();
   const team = useTeamQuery(isAdmin);
   const sites = useSitesQuery();

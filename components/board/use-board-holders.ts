@@ -1,17 +1,15 @@
 import { useEffect, useMemo, useState } from 'react';
 import type { SelectOption } from '@/components/ui/select-field';
-import { useMeQuery } from '@/hooks/api/use-auth';
 import { useTeamQuery } from '@/hooks/api/use-team';
-import { isSupervisory } from '@/shared/rules/roles';
+import { usePermissions } from '@/hooks/auth/use-permissions';
 import type { BoardRow } from '@/shared/types/board';
 
 /**
- * People to filter the board by. Supervisors and admins may list the team; viewers may not, so for them the
+ * People to filter the board by. Those who may list the people (listPeople) choose from the team; the others, so for them the
  * choice is the holders the board has shown so far.
  */
 export function useBoardHolders(rows: BoardRow[]): SelectOption<number>[] {
-  const role = useMeQuery().data?.role;
-  const supervisory = !!role && isSupervisory(role);
+  const supervisory = usePermissions().may('listPeople');
   const team = useTeamQuery(supervisory);
   const [seen, setSeen] = useState<Map<number, string>>(new Map());
   useEffect(() => {

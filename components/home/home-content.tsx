@@ -1,5 +1,5 @@
 import { MaterialCommunityIcons } from '@expo/vector-icons';
-import { Link } from 'expo-router';
+import { Link, type Href } from 'expo-router';
 import type { ComponentProps } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, layout, radius, space } from '@/components/theme';
@@ -7,28 +7,24 @@ import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { EngineerHome } from '@/components/home/engineer-home';
-import { may } from '@/shared/rules/permissions';
+import { may, type RolePermission } from '@/shared/rules/permissions';
 import type { User } from '@/shared/types/user';
 
 interface Action {
-  href: string;
+  href: Href;
   title: string;
-  detail: string;
+  /** What the tile says to someone who may act, and to someone who only reads. */
+  detail: [string, string];
   icon: ComponentProps<typeof MaterialCommunityIcons>['name'];
+  /** Shown to whoever holds this permission (shared/rules/permissions.ts). */
+  permission: RolePermission;
 }
 
-const ENGINEER: Action[] = [
-  { href: '/scan', title: 'Scan a plant label', detail: 'Open an item from its QR label or type its code.', icon: 'qrcode-scan' },
-  { href: '/assets', title: 'Find plant', detail: 'Search sites, plant rooms and items.', icon: 'magnify' },
-];
-const SUPERVISOR: Action[] = [
-  { href: '/board', title: 'Live tags board', detail: 'Every live isolation and override across your sites.', icon: 'view-dashboard-outline' },
-  { href: '/assets', title: 'Plant register', detail: 'Sites, plant rooms and items.', icon: 'file-tree-outline' },
-  { href: '/scan', title: 'Scan a plant label', detail: 'Open an item from its QR label.', icon: 'qrcode-scan' },
-];
-const VIEWER: Action[] = [
-  { href: '/board', title: 'Live tags board', detail: 'Read-only view of the sites you are given.', icon: 'view-dashboard-outline' },
-  { href: '/assets', title: 'Plant register', detail: 'Read-only view of sites and plant.', icon: 'file-tree-outline' },
+// In this order: the board first for those who oversee, the scanner before the register for those who work on plant.
+const ACTIONS: Action[] = [
+  { href: '/board', title: 'Live tags board', detail: ['Every live isolation and override across your sites.', 'Read-only view of the sites you are given.'], icon: 'view-dashboard-outline', permission: 'viewBoard' },
+  { href: '/scan', title: 'Scan a plant label', detail: ['Open an item from its QR label or type its code.', 'Open an item from its QR label.'], icon: 'qrcode-scan', permission: 'raiseTag' },
+  { href: '/assets', title: 'Plant register', detail: ['Search sites, plant rooms and items.', 'Read-only view of sites and plant.'], icon: 'file-tree-outline', permission: 'viewRegister' },
 ];
 
 const HEADINGS: Record<User['role'], string> = {
@@ -40,18 +36,19 @@ const HEADINGS: Record<User['role'], string> = {
 
 export function HomeContent({ user }: { user: User }) {
   const { isWide } = useBreakpoints();
-  const actions = user.role === 'engineer' ? ENGINEER : user.role === 'viewer' ? VIEWER : SUPERVISOR;
+  const actions = ACTIONS.filter((a) => may(user, a.permission));
+  const acts = may(user, 'raiseTag');
   return (
     <View style={{ gap: space.lg }} testID={`home-${user.role}`}>
       <Text variant="title">{HEADINGS[user.role]}</Text>
       <View style={[styles.grid, isWide && styles.gridWide]}>
         {actions.map((a) => (
-          <Link key={a.href} href={a.href as never} asChild>
+          <Link key={a.title} href={a.href} asChild>
             <Pressable style={StyleSheet.flatten([styles.tile, isWide && styles.tileWide])} accessibilityRole="link">
               <MaterialCommunityIcons name={a.icon} size={32} color={colors.brand} />
               <View style={{ flex: 1 }}>
                 <Text bold>{a.title}</Text>
-                <Text muted variant="small">{a.detail}</Text>
+                <Text muted variant="small">{a.detail[acts ? 0 : 1]}</Text>
               </View>
               <MaterialCommunityIcons name="chevron-right" size={28} color={colors.inkMuted} />
             </Pressable>
@@ -59,7 +56,7 @@ export function HomeContent({ user }: { user: User }) {
         ))}
       </View>
       {may(user, 'recordVisits') ? <EngineerHome /> : null}
-      {user.role !== 'viewer' ? (
+      {acts ? (
         <Notice tone="caution" title="Before you work on any plant">
           Isoledger records what has been isolated or overridden, by whom and why. It does not make anything safe. Follow the site's safe isolation procedure, isolate every energy source, lock and tag physically, and prove the isolation before work. Gas work only by a competent person registered as local law requires.
         </Notice>

@@ -1,14 +1,14 @@
 import { useState } from 'react';
 import { Platform, StyleSheet, View } from 'react-native';
 import QRCode from 'react-native-qrcode-svg';
-import { colors, radius, space } from '@/components/theme';
+import { colors, printColors, radius, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { Text } from '@/components/ui/text';
 import { PrintLabelsButtons } from '@/components/labels/print-labels-buttons';
 import { errorMessage } from '@/hooks/api/request';
-import { useMeQuery } from '@/hooks/api/use-auth';
+import { usePermissions } from '@/hooks/auth/use-permissions';
 import { useReplaceLabelMutation, useRetiredLabelsQuery } from '@/hooks/api/use-labels';
 import { formatLabelCode, labelUrl } from '@/shared/rules/label-code';
 import type { Asset } from '@/shared/types/register';
@@ -18,17 +18,17 @@ const origin = () => (Platform.OS === 'web' && typeof window !== 'undefined' ? w
 
 /** The item's QR label on screen (for showing or scanning from another phone), printing and replacement. */
 export function AssetLabelCard({ asset }: { asset: Asset }) {
-  const me = useMeQuery();
+  const { may } = usePermissions();
   const replace = useReplaceLabelMutation(asset.id);
   const retired = useRetiredLabelsQuery(asset.id);
   const [confirming, setConfirming] = useState(false);
-  const canReplace = !!me.data && me.data.role !== 'viewer' && !asset.archived;
+  const canReplace = may('replaceLabel') && !asset.archived;
   return (
     <Card>
       <Text variant="title">Plant label</Text>
       <View style={styles.row}>
         <View style={styles.qr} testID="asset-label-qr">
-          <QRCode value={labelUrl(origin(), asset.labelCode)} size={148} ecl="M" quietZone={12} backgroundColor={colors.surface} color={colors.ink} />
+          <QRCode value={labelUrl(origin(), asset.labelCode)} size={148} ecl="M" quietZone={12} backgroundColor={printColors.paper} color={printColors.ink} />
         </View>
         <View style={{ flex: 1, minWidth: 160, gap: space.xs }}>
           <Text variant="small" muted>Label code</Text>
@@ -59,5 +59,5 @@ export function AssetLabelCard({ asset }: { asset: Asset }) {
 
 const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.lg },
-  qr: { padding: space.sm, backgroundColor: colors.surface, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line },
+  qr: { padding: space.sm, backgroundColor: printColors.paper, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line },
 });

@@ -7,6 +7,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { prepareScannerWasm } from '@/components/labels/zxing-setup';
+import { useTorchSupport } from '@/components/labels/use-torch-support';
 
 prepareScannerWasm();
 
@@ -14,6 +15,7 @@ prepareScannerWasm();
 export function LabelScanner({ onScanned, paused }: { onScanned: (text: string) => void; paused: boolean }) {
   const [permission, requestPermission] = useCameraPermissions();
   const [torch, setTorch] = useState(false);
+  const hasTorch = useTorchSupport();
   const last = useRef<{ text: string; at: number } | null>(null);
 
   if (!permission) return <Text muted>Checking camera access…</Text>;
@@ -49,9 +51,9 @@ export function LabelScanner({ onScanned, paused }: { onScanned: (text: string) 
     <View style={styles.frame} testID="scan-camera">
       <CameraView style={StyleSheet.absoluteFill} facing="back" enableTorch={torch} barcodeScannerSettings={{ barcodeTypes: ['qr'] }} onBarcodeScanned={handle} />
       <View style={styles.target} pointerEvents="none" />
-      {Platform.OS !== 'web' ? (
+      {hasTorch ? (
         <View style={styles.torch}>
-          <Button title={torch ? 'Torch off' : 'Torch on'} variant="secondary" onPress={() => setTorch((t) => !t)} />
+          <Button title={torch ? 'Torch off' : 'Torch on'} variant="secondary" onPress={() => setTorch((t) => !t)} testID="scan-torch" accessibilityState={{ checked: torch }} />
         </View>
       ) : null}
     </View>

@@ -7,7 +7,7 @@ import { colors, layout, space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Text } from '@/components/ui/text';
 import { BrandMark } from '@/components/nav/brand-mark';
-import { NAV_ITEMS, isActive } from '@/components/nav/nav-items';
+import { isActive, navItemsFor } from '@/components/nav/nav-items';
 import type { User } from '@/shared/types/user';
 import { ROLE_LABELS } from '@/shared/rules/roles';
 
@@ -16,7 +16,7 @@ export function AppShell({ user, children }: { user: User; children: ReactNode }
   const { isWide } = useBreakpoints();
   const pathname = usePathname();
   const insets = useSafeAreaInsets();
-  const items = NAV_ITEMS.filter((i) => i.roles.includes(user.role));
+  const items = navItemsFor(user);
 
   if (isWide) {
     return (

@@ -1,24 +1,27 @@
 import type { MaterialCommunityIcons } from '@expo/vector-icons';
 import type { ComponentProps } from 'react';
-import type { Role } from '@/shared/rules/roles';
+import type { Href } from 'expo-router';
+import { may, type Actor, type RolePermission } from '@/shared/rules/permissions';
 
 export interface NavItem {
-  href: string;
+  href: Href & string;
   label: string;
   icon: ComponentProps<typeof MaterialCommunityIcons>['name'];
-  roles: Role[];
+  /** Shown to whoever holds this permission (shared/rules/permissions.ts). */
+  permission: RolePermission;
 }
 
-const everyone: Role[] = ['admin', 'supervisor', 'engineer', 'viewer'];
-
 export const NAV_ITEMS: NavItem[] = [
-  { href: '/', label: 'Home', icon: 'home-variant-outline', roles: everyone },
-  { href: '/scan', label: 'Scan', icon: 'qrcode-scan', roles: everyone },
-  { href: '/assets', label: 'Register', icon: 'file-tree-outline', roles: everyone },
-  { href: '/board', label: 'Board', icon: 'view-dashboard-outline', roles: ['admin', 'supervisor', 'viewer'] },
-  { href: '/team', label: 'Team', icon: 'account-group-outline', roles: ['admin'] },
-  { href: '/settings', label: 'Settings', icon: 'account-cog-outline', roles: everyone },
+  { href: '/', label: 'Home', icon: 'home-variant-outline', permission: 'viewRegister' },
+  { href: '/scan', label: 'Scan', icon: 'qrcode-scan', permission: 'viewRegister' },
+  { href: '/assets', label: 'Register', icon: 'file-tree-outline', permission: 'viewRegister' },
+  { href: '/board', label: 'Board', icon: 'view-dashboard-outline', permission: 'viewBoard' },
+  { href: '/team', label: 'Team', icon: 'account-group-outline', permission: 'administerTeam' },
+  { href: '/settings', label: 'Settings', icon: 'account-cog-outline', permission: 'viewRegister' },
 ];
+
+/** The navigation a signed-in person gets. */
+export const navItemsFor = (actor: Pick<Actor, 'role'>) => NAV_ITEMS.filter((i) => may(actor, i.permission));
 
 // Screens that belong to a tab without living under its path (the register's sites and plant rooms).
 const ALSO_UNDER: Record<string, string[]> = { '/assets': ['/sites', '/plant-rooms'] };

@@ -62,7 +62,7 @@ export function AssetReadingsSection({ asset }: { asset: Asset }) {
         ) : null}
         {mode.kind === 'log' ? (
           <ReadingsForm
-            assetId={asset.id}
+            asset={asset}
             checkSettings={checkSettings}
             onDone={(set) => { setSaved(set); setMode({ kind: 'closed' }); }}
             onCancel={() => setMode({ kind: 'closed' })}
@@ -76,7 +76,7 @@ export function AssetReadingsSection({ asset }: { asset: Asset }) {
           mode.kind === 'correct' && mode.set.id === set.id ? (
             <ReadingsForm
               key={`correct-${set.id}`}
-              assetId={asset.id}
+              asset={asset}
               checkSettings={checkSettings}
               correcting={set}
               onDone={(saved) => { setSaved(saved); setMode({ kind: 'closed' }); }}

@@ -20,11 +20,12 @@ export function CheckResults({ results, emptyText, testID }: { results: CheckRes
 }
 
 export function CheckResultCard({ result, wide }: { result: CheckResult; wide?: boolean }) {
+  const shown = result.valueText ?? `${formatNumber(result.value, 3)}${result.unit ? ` ${result.unit}` : ''}`;
   return (
-    <View style={[styles.card, wide && styles.cardWide]} testID={`check-${result.key}`} accessibilityLabel={`${result.label}: ${formatNumber(result.value, 3)} ${result.unit}`}>
+    <View style={[styles.card, wide && styles.cardWide]} testID={`check-${result.key}`} accessibilityLabel={`${result.label}: ${shown}`}>
       <View style={styles.head}>
         <Text bold style={{ flex: 1 }}>{result.label}</Text>
-        <Text variant="title" testID={`check-${result.key}-value`}>{`${formatNumber(result.value, 3)} ${result.unit}`}</Text>
+        <Text variant="title" testID={`check-${result.key}-value`}>{shown}</Text>
       </View>
       <Text variant="small" style={styles.formula}>{result.formula}</Text>
       <View style={styles.inputs}>
@@ -32,6 +33,13 @@ export function CheckResultCard({ result, wide }: { result: CheckResult; wide?: 
           <Text key={i.label} variant="small" muted>{`${i.label}: ${formatNumber(i.value, 4)}${i.unit ? ` ${i.unit}` : ''}`}</Text>
         ))}
       </View>
+      {result.limit ? (
+        <Text variant="small" testID={`check-${result.key}-limit`}>
+          <Text variant="small" bold>Limit: </Text>
+          {result.limit}
+        </Text>
+      ) : null}
+      {result.source ? <Text variant="small" muted testID={`check-${result.key}-source`}>{`Source: ${result.source}`}</Text> : null}
       {result.flag ? <FlagLine flag={result.flag} testID={`check-${result.key}-flag`} /> : (
         <View style={styles.quiet}>
           <MaterialCommunityIcons name="check" size={18} color={colors.inkMuted} />

@@ -1,6 +1,6 @@
 // The calculator form's values, and their conversion to the calculator's inputs
 // (litres, °C, metres, bar gauge) from whichever units were chosen on the form.
-import { formatNumber, m3ToLitres, paToBar, PRE_CHARGE_MARGIN_CHOICES, type ExpansionVesselInputs } from '@/shared/calc';
+import { formatNumber, m3ToLitres, paToBar, PRE_CHARGE_MARGIN_CHOICES, type ExpansionVesselInputs, type GlycolKind } from '@/shared/calc';
 import { entryToSi, parseEntry } from '@/components/readings/reading-fields';
 
 export interface VesselFormValues {
@@ -15,6 +15,12 @@ export interface VesselFormValues {
   preChargeUnit: string;
   vessels: string[];
   preChargeMarginBar: number;
+  /** Size only: no vessel installed yet. */
+  sizeOnly: boolean;
+  glycolKind: GlycolKind | null;
+  glycolPercent: string;
+  measuredPressure: string;
+  measuredPressureUnit: string;
 }
 
 const text = (v: number | null | undefined) => (v === null || v === undefined ? '' : formatNumber(v, 6));
@@ -33,6 +39,11 @@ export function initialVesselForm(from?: Partial<ExpansionVesselInputs> | null, 
     preChargeUnit: 'bar',
     vessels: vessels.length ? vessels : [''],
     preChargeMarginBar: marginBar ?? PRE_CHARGE_MARGIN_CHOICES[0].value,
+    sizeOnly: false,
+    glycolKind: from?.glycol?.kind ?? null,
+    glycolPercent: text(from?.glycol?.percent),
+    measuredPressure: '',
+    measuredPressureUnit: 'bar',
   };
 }
 
@@ -41,6 +52,9 @@ const FORM_FIELD: Record<string, string> = {
   systemVolumeL: 'systemVolume',
   safetyValveSettingBarGauge: 'safetyValve',
   preChargeBarGauge: 'preCharge',
+  'glycol.percent': 'glycolPercent',
+  'glycol.kind': 'glycolKind',
+  measuredPressureBarGauge: 'measuredPressure',
 };
 
 export function vesselFormPath(apiPath: string): string {
@@ -59,11 +73,13 @@ export function vesselFormToRequest(v: VesselFormValues) {
   const volumeM3 = entryToSi(v.systemVolume, 'volume', v.systemVolumeUnit);
   const valvePa = entryToSi(v.safetyValve, 'pressure', v.safetyValveUnit);
   const preChargePa = entryToSi(v.preCharge, 'pressure', v.preChargeUnit);
+  const measuredPa = entryToSi(v.measuredPressure, 'pressure', v.measuredPressureUnit);
+  const glycolPercent = parseEntry(v.glycolPercent);
   const vessels: number[] = [];
   v.vessels.forEach((entry, i) => {
     const litres = parseEntry(entry);
     // One empty row means "no vessel fitted"; indices then still match the schema's error paths.
-    if (litres === null && v.vessels.length === 1) return;
+    if (v.sizeOnly || (litres === null && v.vessels.length === 1)) return;
     if (litres === null) unreadable[`vessels.${i}`] = 'Enter the vessel volume or remove this row.';
     else if (Number.isNaN(litres)) unreadable[`vessels.${i}`] = 'Enter a number.';
     else vessels.push(litres);
@@ -77,6 +93,9 @@ export function vesselFormToRequest(v: VesselFormValues) {
     preChargeBarGauge: num('preCharge', preChargePa === null || Number.isNaN(preChargePa) ? preChargePa : paToBar(preChargePa)) ?? null,
     installedVesselVolumesL: vessels,
     preChargeMarginBar: v.preChargeMarginBar,
+    mode: v.sizeOnly ? ('size' as const) : ('check' as const),
+    glycol: v.glycolKind ? { kind: v.glycolKind, percent: num('glycolPercent', glycolPercent) as number } : null,
+    measuredPressureBarGauge: num('measuredPressure', measuredPa === null || Number.isNaN(measuredPa) ? measuredPa : paToBar(measuredPa)) ?? null,
   };
   return { body, unreadable };
 }

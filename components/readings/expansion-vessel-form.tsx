@@ -14,13 +14,17 @@ import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { RequestError, errorMessage } from '@/hooks/api/request';
 import { useExpansionVesselCheckMutation } from '@/hooks/api/use-calc';
-import { UNIT_OPTIONS, type ExpansionVesselInputs } from '@/shared/calc';
+import { Chip } from '@/components/ui/chip';
+import { SelectField } from '@/components/ui/select-field';
+import { GLYCOL_KINDS, GLYCOL_LABELS, GLYCOL_SOURCE, UNIT_OPTIONS, type ExpansionVesselInputs } from '@/shared/calc';
 import { expansionVesselRequestSchema, type ExpansionVesselRequest } from '@/shared/schemas/readings';
 
 type Errors = FormikErrors<VesselFormValues>;
 const LITRES = [{ key: 'L', label: 'L' }];
 const CELSIUS = UNIT_OPTIONS.temperature;
 const METRES = UNIT_OPTIONS.length;
+const PERCENT = UNIT_OPTIONS.percent;
+const GLYCOL_OPTIONS = GLYCOL_KINDS.map((k) => ({ value: k, label: GLYCOL_LABELS[k] }));
 
 async function validateVessel(values: VesselFormValues): Promise<Errors> {
   const { body, unreadable } = vesselFormToRequest(values);
@@ -93,7 +97,27 @@ export function ExpansionVesselForm({ initial, initialMarginBar }: { initial?: P
               {field('safetyValve', 'Safety valve setting', UNIT_OPTIONS.pressure, 'safetyValveUnit')}
               {field('preCharge', 'Vessel pre-charge (optional)', UNIT_OPTIONS.pressure, 'preChargeUnit', 'Leave empty to use the minimum pre-charge.')}
             </View>
-            <View style={{ gap: space.sm }}>
+            <View style={[isWide && styles.fieldsWide]}>
+              <View style={isWide ? styles.fieldWide : styles.gap}>
+                <SelectField
+                  label="Glycol in the system water"
+                  value={values.glycolKind}
+                  options={GLYCOL_OPTIONS}
+                  onChange={(v) => setFieldValue('glycolKind', v)}
+                  placeholder="None (plain water)"
+                  clearable
+                  error={show('glycolKind')}
+                  testID="vessel-glycolKind"
+                />
+              </View>
+              {values.glycolKind ? field('glycolPercent', 'Glycol concentration (by mass)', PERCENT, undefined, GLYCOL_SOURCE) : null}
+              {field('measuredPressure', 'Pressure read at the vessel (optional)', UNIT_OPTIONS.pressure, 'measuredPressureUnit', 'Compared with the final design pressure and the safety valve setting.')}
+            </View>
+            <View style={styles.modeRow} role="radiogroup" aria-label="What to work out">
+              <Chip label="Check the installed vessels" selected={!values.sizeOnly} onPress={() => setFieldValue('sizeOnly', false)} testID="vessel-mode-check" />
+              <Chip label="Size only: no vessel yet" selected={values.sizeOnly} onPress={() => setFieldValue('sizeOnly', true)} testID="vessel-mode-size" />
+            </View>
+            <View style={{ gap: space.sm, display: values.sizeOnly ? 'none' : 'flex' }}>
               <Text variant="label" bold>Installed vessels (nominal volume)</Text>
               {values.vessels.map((v, i) => (
                 <View key={i} style={styles.vesselRow}>
@@ -119,7 +143,7 @@ export function ExpansionVesselForm({ initial, initialMarginBar }: { initial?: P
             </View>
             <MarginChoice value={values.preChargeMarginBar} onChange={(v) => setFieldValue('preChargeMarginBar', v)} />
             {status ? <Notice tone="danger" word="Not checked">{status}</Notice> : null}
-            <Button title="Check the vessel size" onPress={() => handleSubmit()} busy={isSubmitting} testID="vessel-check" />
+            <Button title={values.sizeOnly ? 'Size the vessel' : 'Check the vessel size'} onPress={() => handleSubmit()} busy={isSubmitting} testID="vessel-check" />
             {stale ? <Notice tone="info" word="Inputs changed">The result below is for the previous inputs. Check again to update it.</Notice> : null}
             {check.data ? <ExpansionVesselResultView result={check.data.result} settings={check.data.settings} /> : null}
           </View>
@@ -133,5 +157,7 @@ const styles = StyleSheet.create({
   fieldsWide: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg },
   fieldWide: { flexBasis: 320, flexGrow: 1 },
   vesselRow: { flexDirection: 'row', alignItems: 'flex-start', gap: space.sm },
+  gap: { marginBottom: space.sm },
+  modeRow: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   remove: { minWidth: layout.minTouch, minHeight: layout.minTouch, marginTop: space.xl, alignItems: 'center', justifyContent: 'center' },
 });

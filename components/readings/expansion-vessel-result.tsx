@@ -19,14 +19,20 @@ export function ExpansionVesselResultView({ result, settings, workingOpen = true
     ['Installed nominal volume', fmt(result.installedNominalVolumeL, 'L')],
     ['Expansion volume', fmt(result.expansionVolumeL, 'L')],
     ['Water reserve', fmt(result.waterReserveL, 'L')],
-    ['Minimum pre-charge', fmt(result.minimumPreChargeBarGauge, 'bar')],
+    ['Minimum pre-charge (EN 12828)', fmt(result.standardMinimumPreChargeBarGauge, 'bar')],
+    ['Minimum pre-charge with the chosen margin', fmt(result.minimumPreChargeBarGauge, 'bar')],
     ['Pre-charge used', fmt(result.preChargeBarGauge, 'bar')],
     ['Final pressure', fmt(result.finalPressureBarGauge, 'bar')],
     ['Cold fill pressure with installed vessels', fmt(result.fillPressureBarGauge, 'bar')],
   ];
   return (
     <View style={{ gap: space.md }} testID="vessel-result">
-      {result.verdict === 'pass' ? (
+      {result.verdict === 'sized' ? (
+        <Notice tone="info" word="Sized" title={`a vessel of at least ${fmt(result.requiredNominalVolumeL, 'L')}`}>
+          {`Pre-charge it to ${fmt(result.preChargeBarGauge, 'bar')} and fill cold to about ${fmt(result.fillPressureAtRequiredVolumeBarGauge, 'bar')}. ` +
+            'Size only: no installed vessel was checked.'}
+        </Notice>
+      ) : result.verdict === 'pass' ? (
         <Notice tone="safe" word="Pass" title="installed volume covers the requirement">
           For these inputs the installed vessels meet the EN 12828 sizing. This is a design check on paper, not an inspection of the vessels.
         </Notice>
@@ -37,6 +43,8 @@ export function ExpansionVesselResultView({ result, settings, workingOpen = true
           </View>
         </Notice>
       )}
+      {result.cautions.map((c) => <Notice key={c} tone="caution" word="Caution">{c}</Notice>)}
+      {result.notes.map((n) => <Notice key={n} tone="info" word="Note">{n}</Notice>)}
       <View style={[styles.figures, isWide && styles.figuresWide]}>
         {figures.map(([label, value]) => (
           <View key={label} style={[styles.figure, isWide && styles.figureWide]}>

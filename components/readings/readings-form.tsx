@@ -1,16 +1,12 @@
 import { Formik, getIn, setIn, type FormikErrors } from 'formik';
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { ValidationError, type AnyObjectSchema } from 'yup';
+import type { AnyObjectSchema } from 'yup';
+import { FormStatusBanner } from '@/components/forms/status-banner';
+import { submitForm, validateWithSchema } from '@/components/forms/submit';
 import { CheckResults } from '@/components/readings/check-results';
-import { MeasurementField } from '@/components/readings/measurement-field';
-import {
-  formPathFor,
-  initialReadingForm,
-  READING_FIELDS,
-  readingFormToSi,
-  type ReadingFormValues,
-} from '@/components/readings/reading-fields';
+import { formPathFor, initialReadingForm, readingFormToSi, type ReadingFormValues } from '@/components/readings/reading-fields';
+import { ReadingSectionFields } from '@/components/readings/reading-section-fields';
 import { SurfaceTemperaturesField } from '@/components/readings/surface-temperatures-field';
 import { layout, space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
@@ -18,28 +14,34 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
-import { RequestError, errorMessage } from '@/hooks/api/request';
 import { useCorrectReadingMutation, useLogReadingsMutation } from '@/hooks/api/use-readings';
-import { UNIT_OPTIONS } from '@/shared/calc';
+import { READING_SECTIONS, readingSectionsFor } from '@/shared/rules/reading-sections';
 import { emptyReadingValues, runReadingChecks } from '@/shared/rules/readings';
 import { readingCorrectionSchema, readingSetSchema, type ReadingCorrectionInput, type ReadingSetInput } from '@/shared/schemas/readings';
 import type { CheckSettings, ReadingSet, ReadingValues } from '@/shared/types/readings';
+import type { Asset } from '@/shared/types/register';
 
 type Errors = FormikErrors<ReadingFormValues> & { _?: string };
 
-/** Converts to SI and runs the same schema as the server; errors land on the form's own field names. */
-async function validateReadings(values: ReadingFormValues, schema: AnyObjectSchema): Promise<Errors> {
-  const { body, unreadable } = readingFormToSi(values);
+/** Errors named by the API's keys (flowTemperatureC, surfaceTemperatures.0.location) moved onto the form's fields. */
+function onFormFields(nested: object): Errors {
   let errors: Errors = {};
-  try {
-    await schema.validate(body, { abortEarly: false });
-  } catch (err) {
-    if (!(err instanceof ValidationError)) throw err;
-    for (const e of err.inner.length ? err.inner : [err]) {
-      const path = e.path ? formPathFor(e.path) : '_';
-      if (!getIn(errors, path)) errors = setIn(errors, path, e.message);
+  const walk = (value: unknown, path: string) => {
+    if (typeof value === 'string') {
+      const target = formPathFor(path);
+      if (!getIn(errors, target)) errors = setIn(errors, target, value);
+    } else if (value && typeof value === 'object') {
+      for (const [k, v] of Object.entries(value)) walk(v, path ? `${path}.${k}` : k);
     }
-  }
+  };
+  walk(nested, '');
+  return errors;
+}
+
+/** The shared schema on the SI body, as the server runs it; entries that are not numbers are named too. */
+async function validateReadings(values: ReadingFormValues, schema: AnyObjectSchema): Promise<Errors> {
+  const { unreadable } = readingFormToSi(values);
+  let errors = onFormFields(await validateWithSchema<ReadingFormValues>(schema, (v) => readingFormToSi(v).body)(values));
   for (const [path, message] of Object.entries(unreadable)) errors = setIn(errors, path, message);
   return errors;
 }
@@ -47,13 +49,11 @@ async function validateReadings(values: ReadingFormValues, schema: AnyObjectSche
 /** Readings typed so far as SI values; unreadable entries count as not read. */
 function liveValues(values: ReadingFormValues): ReadingValues {
   const { body } = readingFormToSi(values);
-  const v = { ...emptyReadingValues(), ...body } as ReadingValues;
-  v.surfaceTemperatures = [];
-  return v;
+  return { ...emptyReadingValues(), ...body, surfaceTemperatures: [] } as ReadingValues;
 }
 
 interface Props {
-  assetId: number;
+  asset: Pick<Asset, 'id' | 'type' | 'energySources'>;
   checkSettings: CheckSettings;
   /** When set, the form appends a correction to this set instead of logging a new one. */
   correcting?: ReadingSet | null;
@@ -61,35 +61,33 @@ interface Props {
   onCancel?: () => void;
 }
 
-export function ReadingsForm({ assetId, checkSettings, correcting, onDone, onCancel }: Props) {
+export function ReadingsForm({ asset, checkSettings, correcting, onDone, onCancel }: Props) {
   const { isWide } = useBreakpoints();
-  const log = useLogReadingsMutation(assetId);
-  const correct = useCorrectReadingMutation(assetId);
+  const log = useLogReadingsMutation(asset.id);
+  const correct = useCorrectReadingMutation(asset.id);
+  const [showAll, setShowAll] = useState(false);
   const schema = correcting ? readingCorrectionSchema : readingSetSchema;
   const initialValues = useMemo(() => initialReadingForm(correcting?.values, correcting?.note ?? ''), [correcting]);
+  // The item's own sections, plus any a corrected set already has values in.
+  const offered = readingSectionsFor(asset.type, asset.energySources);
+  const filled = READING_SECTIONS.filter((s) => correcting && s.fields.some((k) => correcting.values[k] !== null));
+  const mine = READING_SECTIONS.filter((s) => offered.includes(s) || filled.includes(s));
+  const sections = showAll ? READING_SECTIONS : mine;
   return (
     <Formik<ReadingFormValues>
       initialValues={initialValues}
       validate={(values) => validateReadings(values, schema)}
       onSubmit={async (values, { setErrors, setStatus }) => {
-        setStatus(undefined);
         const { body } = readingFormToSi(values);
-        try {
-          const saved = correcting
-            ? await correct.mutateAsync({ readingId: correcting.id, input: body as ReadingCorrectionInput })
-            : await log.mutateAsync(body as ReadingSetInput);
-          onDone(saved);
-        } catch (err) {
-          if (err instanceof RequestError && err.fields) {
-            let mapped: Errors = {};
-            for (const [path, message] of Object.entries(err.fields)) mapped = setIn(mapped, formPathFor(path), message);
-            setErrors(mapped);
-          }
-          setStatus(errorMessage(err));
-        }
+        const saved = await submitForm({ setErrors: (e) => setErrors(onFormFields(e)), setStatus }, () =>
+          correcting
+            ? correct.mutateAsync({ readingId: correcting.id, input: body as ReadingCorrectionInput })
+            : log.mutateAsync(body as ReadingSetInput),
+        );
+        if (saved) onDone(saved);
       }}
     >
-      {({ values, errors, touched, setFieldValue, setFieldTouched, handleSubmit, isSubmitting, submitCount, status }) => {
+      {({ values, errors, touched, setFieldValue, setFieldTouched, handleSubmit, isSubmitting, submitCount }) => {
         const errs = errors as Errors;
         const show = (path: string) => (submitCount > 0 || getIn(touched, path) ? (getIn(errs, path) as string | undefined) : undefined);
         let live: ReturnType<typeof runReadingChecks> | null = null;
@@ -106,24 +104,15 @@ export function ReadingsForm({ assetId, checkSettings, correcting, onDone, onCan
                   'this correction replaces it in checks, trends and exports.'}
               </Notice>
             ) : null}
-            <View style={[styles.fields, isWide && styles.fieldsWide]}>
-              {READING_FIELDS.map((f) => (
-                <View key={f.key} style={isWide ? styles.fieldWide : undefined}>
-                  <MeasurementField
-                    label={f.label}
-                    hint={f.hint}
-                    value={values.entries[f.key]}
-                    onChangeText={(t) => setFieldValue(`entries.${f.key}`, t)}
-                    onBlur={() => setFieldTouched(`entries.${f.key}`, true)}
-                    unit={values.units[f.key]}
-                    units={UNIT_OPTIONS[f.quantity]}
-                    onUnitChange={(u) => setFieldValue(`units.${f.key}`, u)}
-                    error={show(`entries.${f.key}`)}
-                    testID={`reading-${f.key}`}
-                  />
-                </View>
-              ))}
-            </View>
+            {sections.map((s) => <ReadingSectionFields key={s.key} section={s} />)}
+            {mine.length < READING_SECTIONS.length ? (
+              <Button
+                title={showAll ? 'Show only this item’s readings' : 'Show every kind of reading'}
+                variant="quiet"
+                onPress={() => setShowAll((v) => !v)}
+                testID="readings-show-all"
+              />
+            ) : null}
             <SurfaceTemperaturesField showErrors={submitCount > 0} />
             <TextField
               label="Note"
@@ -151,7 +140,7 @@ export function ReadingsForm({ assetId, checkSettings, correcting, onDone, onCan
               {live ? <CheckResults results={live.results} testID="live-checks" /> : <Text muted>Checks appear once the readings are in range.</Text>}
             </View>
             {errs._ && submitCount > 0 ? <Notice tone="caution" word="Nothing to save">{errs._}</Notice> : null}
-            {status ? <Notice tone="danger" word="Not saved">{status}</Notice> : null}
+            <FormStatusBanner word="Not saved" />
             <View style={[styles.actions, isWide && styles.actionsWide]}>
               <Button title={correcting ? 'Save correction' : 'Save readings'} onPress={() => handleSubmit()} busy={isSubmitting} testID="readings-save" />
               {onCancel ? <Button title="Cancel" variant="secondary" onPress={onCancel} testID="readings-cancel" /> : null}
@@ -164,9 +153,6 @@ export function ReadingsForm({ assetId, checkSettings, correcting, onDone, onCan
 }
 
 const styles = StyleSheet.create({
-  fields: { gap: 0 },
-  fieldsWide: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg },
-  fieldWide: { flexBasis: 300, flexGrow: 1 },
   actions: { gap: space.sm },
   actionsWide: { flexDirection: 'row' },
 });

@@ -10,11 +10,12 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { RequestError, errorMessage } from '@/hooks/api/request';
 import { useSaveHeatingSystemMutation } from '@/hooks/api/use-heating-systems';
-import { formatNumber, UNIT_OPTIONS, type PhysicalQuantity } from '@/shared/calc';
+import { SelectField } from '@/components/ui/select-field';
+import { formatNumber, GLYCOL_KINDS, GLYCOL_LABELS, UNIT_OPTIONS, type GlycolKind, type PhysicalQuantity } from '@/shared/calc';
 import { heatingSystemSchema, type HeatingSystemInput } from '@/shared/schemas/readings';
 import type { HeatingSystem } from '@/shared/types/readings';
 
-type Key = Exclude<keyof HeatingSystemInput, 'preChargeMarginBar'>;
+type Key = Exclude<keyof HeatingSystemInput, 'preChargeMarginBar' | 'glycolKind'>;
 interface FieldDef {
   key: Key;
   label: string;
@@ -32,13 +33,20 @@ const FIELDS: FieldDef[] = [
   { key: 'staticHeightM', label: 'Static height', quantity: 'length', hint: 'From the vessel up to the highest point.' },
   { key: 'maxFlowTemperatureC', label: 'Maximum flow temperature', quantity: 'temperature' },
   { key: 'fillTemperatureC', label: 'Fill temperature', quantity: 'temperature' },
+  { key: 'glycolPercent', label: 'Glycol concentration', quantity: 'percent', hint: 'By mass, with the glycol chosen below; empty for plain water.' },
+  { key: 'compensationOutsideLowC', label: 'Compensation: cold-day outside temperature', quantity: 'temperature', hint: 'Leave the four curve values empty for a fixed setpoint.' },
+  { key: 'compensationFlowAtLowC', label: 'Compensation: flow on the cold day', quantity: 'temperature' },
+  { key: 'compensationOutsideHighC', label: 'Compensation: mild-day outside temperature', quantity: 'temperature' },
+  { key: 'compensationFlowAtHighC', label: 'Compensation: flow on the mild day', quantity: 'temperature' },
 ];
+const GLYCOL_OPTIONS = GLYCOL_KINDS.map((k) => ({ value: k, label: GLYCOL_LABELS[k] }));
 const KELVIN: UnitOption[] = [{ key: 'K', label: 'K' }];
 
 interface Values {
   entries: Record<Key, string>;
   units: Record<Key, string>;
   preChargeMarginBar: number | null;
+  glycolKind: GlycolKind | null;
 }
 
 function initial(system: HeatingSystem): Values {
@@ -46,14 +54,14 @@ function initial(system: HeatingSystem): Values {
   const units = {} as Record<Key, string>;
   for (const f of FIELDS) {
     units[f.key] = f.quantity ? defaultUnit(f.quantity) : 'K';
-    const v = system[f.key];
+    const v = system[f.key] as number | null;
     entries[f.key] = f.quantity ? siToEntry(v, f.quantity, units[f.key]) : v === null ? '' : formatNumber(v, 5);
   }
-  return { entries, units, preChargeMarginBar: system.preChargeMarginBar };
+  return { entries, units, preChargeMarginBar: system.preChargeMarginBar, glycolKind: system.glycolKind };
 }
 
 function toBody(values: Values): { body: HeatingSystemInput; unreadable: Record<string, string> } {
-  const body: Record<string, number | null> = { preChargeMarginBar: values.preChargeMarginBar };
+  const body: Record<string, number | string | null> = { preChargeMarginBar: values.preChargeMarginBar, glycolKind: values.glycolKind };
   const unreadable: Record<string, string> = {};
   for (const f of FIELDS) {
     const text = values.entries[f.key];
@@ -61,10 +69,10 @@ function toBody(values: Values): { body: HeatingSystemInput; unreadable: Record<
     if (Number.isNaN(v)) unreadable[`entries.${f.key}`] = 'Enter a number.';
     body[f.key] = v === null || Number.isNaN(v) ? null : v;
   }
-  return { body: body as HeatingSystemInput, unreadable };
+  return { body: body as unknown as HeatingSystemInput, unreadable };
 }
 
-const formPath = (apiPath: string) => (apiPath && apiPath !== '_' && apiPath !== 'preChargeMarginBar' ? `entries.${apiPath}` : apiPath || '_');
+const formPath = (apiPath: string) => (apiPath && !['_', 'preChargeMarginBar', 'glycolKind'].includes(apiPath) ? `entries.${apiPath}` : apiPath || '_');
 
 /** Design values of one heating system; checks of every item on it use them from the next set on. */
 export function SystemSettingsForm({ system, onDone }: { system: HeatingSystem; onDone: () => void }) {
@@ -121,6 +129,16 @@ export function SystemSettingsForm({ system, onDone }: { system: HeatingSystem; 
                 </View>
               ))}
             </View>
+            <SelectField
+              label="Glycol in the system water"
+              value={values.glycolKind}
+              options={GLYCOL_OPTIONS}
+              onChange={(v) => setFieldValue('glycolKind', v)}
+              placeholder="None (plain water)"
+              clearable
+              error={submitCount > 0 && errs.glycolKind}
+              testID="system-glycolKind"
+            />
             <MarginChoice value={values.preChargeMarginBar} onChange={(v) => setFieldValue('preChargeMarginBar', v)} />
             {submitCount > 0 && errs._ ? <Notice tone="caution" word="Check">{errs._}</Notice> : null}
             {status ? <Notice tone="danger" word="Not saved">{status}</Notice> : null}

@@ -4,7 +4,7 @@ import { Pressable, ScrollView, StyleSheet, View, type LayoutChangeEvent } from 
 import Svg, { Line } from 'react-native-svg';
 import { chart, seriesStyle, type SeriesStyle } from '@/components/readings/chart-theme';
 import { Marker, TrendPlot } from '@/components/readings/trend-plot';
-import { buildTrendSeries, referenceLines, TREND_GROUPS, type TrendGroupKey, type TrendSeries } from '@/components/readings/trend-series';
+import { buildTrendSeries, limitLines, referenceLines, TREND_GROUPS, type TrendGroupKey, type TrendSeries } from '@/components/readings/trend-series';
 import { colors, layout, radius, space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Chip } from '@/components/ui/chip';
@@ -60,7 +60,7 @@ export function TrendChart({ readings, checkSettings }: { readings: ReadingSet[]
   const inGroup = all.filter((s) => s.group === group.key);
   const styled = inGroup.map((s, i) => ({ series: s, style: seriesStyle(i) }));
   const shown = styled.filter(({ series }) => !hidden.has(series.key));
-  const refs = referenceLines(checkSettings).filter((r) => r.group === group.key);
+  const refs = [...referenceLines(checkSettings), ...limitLines(all)].filter((r) => r.group === group.key);
   const sets = new Set(shown.flatMap((s) => s.series.points.map((p) => p.readingId))).size;
   const toggle = (key: string) =>
     setHidden((prev) => {
@@ -76,7 +76,7 @@ export function TrendChart({ readings, checkSettings }: { readings: ReadingSet[]
       {/* One row that scrolls sideways on a phone, so the choices do not push the chart off screen. */}
       <ScrollView horizontal={!isWide} showsHorizontalScrollIndicator={false} contentContainerStyle={[styles.row, !isWide && styles.noWrap]} role="radiogroup" aria-label="Quantity to chart">
         {groups.map((g) => (
-          <Chip key={g.key} label={`${g.label} (${g.unit})`} selected={g.key === group.key} onPress={() => setGroup(g.key)} testID={`trend-group-${g.key}`} />
+          <Chip key={g.key} label={g.unit ? `${g.label} (${g.unit})` : g.label} selected={g.key === group.key} onPress={() => setGroup(g.key)} testID={`trend-group-${g.key}`} />
         ))}
       </ScrollView>
       <View onLayout={onLayout} style={styles.plot}>
@@ -101,7 +101,7 @@ export function TrendChart({ readings, checkSettings }: { readings: ReadingSet[]
         ))}
       </View>
       {refs.length ? (
-        <Text variant="small" muted>Dotted lines: design values of the system ({refs.map((r) => r.label.toLowerCase()).join(', ')}).</Text>
+        <Text variant="small" muted>Dotted lines: design values and limits ({refs.map((r) => r.label).join(', ')}).</Text>
       ) : null}
     </View>
   );

@@ -1,9 +1,11 @@
 // Turns an item's reading sets into chart series, one per measured or computed quantity,
 // in the units engineers read them in. Plain TypeScript so it can be tested without a screen.
-import { isReading, m3PerSToLitresPerSecond, paToBar, type HeatingCheckKey } from '@/shared/calc';
+import { FLUE_LIMITS, isReading, LEGIONELLA_LIMITS, m3PerSToLitresPerSecond, paToBar, paToMbar, type CheckKey } from '@/shared/calc';
 import type { CheckSettings, ReadingSet } from '@/shared/types/readings';
 
-export type TrendGroupKey = 'temperature' | 'delta-t' | 'pressure' | 'flow' | 'heat' | 'pump-head';
+export type TrendGroupKey =
+  | 'temperature' | 'delta-t' | 'pressure' | 'flow' | 'heat' | 'pump-head'
+  | 'gas-pressure' | 'flue-gas' | 'flue-co' | 'flue-ratio' | 'flue-temperature' | 'efficiency' | 'ph' | 'conductivity';
 
 export interface TrendGroup {
   key: TrendGroupKey;
@@ -19,6 +21,14 @@ export const TREND_GROUPS: TrendGroup[] = [
   { key: 'flow', label: 'Flow rate', unit: 'L/s' },
   { key: 'heat', label: 'Heat delivered', unit: 'kW' },
   { key: 'pump-head', label: 'Pump head', unit: 'm' },
+  { key: 'gas-pressure', label: 'Gas pressures', unit: 'mbar' },
+  { key: 'flue-gas', label: 'O₂ and CO₂', unit: '%' },
+  { key: 'flue-co', label: 'CO in the flue', unit: 'ppm' },
+  { key: 'flue-ratio', label: 'CO/CO₂ ratio', unit: '' },
+  { key: 'flue-temperature', label: 'Flue temperature', unit: '°C' },
+  { key: 'efficiency', label: 'Efficiency', unit: '%' },
+  { key: 'ph', label: 'pH', unit: 'pH' },
+  { key: 'conductivity', label: 'Conductivity', unit: 'µS/cm' },
 ];
 
 export interface TrendPoint {
@@ -48,7 +58,7 @@ interface ValueSeriesDef {
   read: (r: ReadingSet) => number | null | undefined;
 }
 
-const resultValue = (key: HeatingCheckKey) => (r: ReadingSet) => r.results.find((x) => x.key === key)?.value;
+const resultValue = (key: CheckKey) => (r: ReadingSet) => r.results.find((x) => x.key === key)?.value;
 const scaled = (v: number | null, f: (n: number) => number) => (isReading(v) ? f(v) : null);
 
 const VALUE_SERIES: ValueSeriesDef[] = [
@@ -62,6 +72,23 @@ const VALUE_SERIES: ValueSeriesDef[] = [
   { key: 'flow-rate', group: 'flow', label: 'Flow rate', read: (r) => scaled(r.values.flowRateM3PerS, m3PerSToLitresPerSecond) },
   { key: 'heat', group: 'heat', label: 'Heat delivered', read: resultValue('heat-delivered') },
   { key: 'pump-head', group: 'pump-head', label: 'Pump head', read: resultValue('pump-head') },
+  { key: 'store', group: 'temperature', label: 'Stored hot water', read: (r) => r.values.storeTemperatureC },
+  { key: 'hw-return', group: 'temperature', label: 'Hot water return', read: (r) => r.values.hotWaterReturnTemperatureC },
+  { key: 'outlet', group: 'temperature', label: 'Hot outlet', read: (r) => r.values.outletTemperatureC },
+  { key: 'outside', group: 'temperature', label: 'Outside', read: (r) => r.values.outsideTemperatureC },
+  { key: 'unit-cut-in', group: 'pressure', label: 'Unit cut-in', read: (r) => scaled(r.values.unitCutInPressureGaugePa, paToBar) },
+  { key: 'unit-cut-out', group: 'pressure', label: 'Unit cut-out', read: (r) => scaled(r.values.unitCutOutPressureGaugePa, paToBar) },
+  { key: 'gas-standing', group: 'gas-pressure', label: 'Standing', read: (r) => scaled(r.values.gasStandingPressurePa, paToMbar) },
+  { key: 'gas-working', group: 'gas-pressure', label: 'Working', read: (r) => scaled(r.values.gasWorkingPressurePa, paToMbar) },
+  { key: 'burner', group: 'gas-pressure', label: 'Burner', read: (r) => scaled(r.values.burnerPressurePa, paToMbar) },
+  { key: 'o2', group: 'flue-gas', label: 'O₂', read: (r) => r.values.flueO2Percent },
+  { key: 'co2', group: 'flue-gas', label: 'CO₂', read: (r) => r.values.flueCo2Percent ?? resultValue('flue-co2')(r) },
+  { key: 'co', group: 'flue-co', label: 'CO', read: (r) => r.values.flueCoPpm },
+  { key: 'ratio', group: 'flue-ratio', label: 'CO/CO₂', read: resultValue('flue-co-co2-ratio') },
+  { key: 'flue-temperature', group: 'flue-temperature', label: 'Flue', read: (r) => r.values.flueTemperatureC },
+  { key: 'efficiency', group: 'efficiency', label: 'Efficiency', read: (r) => r.values.combustionEfficiencyPercent },
+  { key: 'ph', group: 'ph', label: 'pH', read: (r) => r.values.waterPh },
+  { key: 'conductivity', group: 'conductivity', label: 'Conductivity', read: (r) => r.values.conductivityUSPerCm },
 ];
 
 /** Series of the current (not superseded) sets, oldest first; empty series are left out. */
@@ -103,6 +130,20 @@ export function referenceLines(settings: CheckSettings | null | undefined): Refe
   if (isReading(s.fillPressureGaugePa)) lines.push({ group: 'pressure', label: 'Fill', value: paToBar(s.fillPressureGaugePa), tone: 'neutral' });
   if (isReading(s.designDeltaTK)) lines.push({ group: 'delta-t', label: 'Design', value: s.designDeltaTK, tone: 'neutral' });
   if (isReading(s.flowSetpointC)) lines.push({ group: 'temperature', label: 'Setpoint', value: s.flowSetpointC, tone: 'neutral' });
+  return lines;
+}
+
+/** Published limits drawn on the charts where the readings they apply to are shown. */
+export function limitLines(series: TrendSeries[]): ReferenceLine[] {
+  const has = (key: string) => series.some((s) => s.key === key);
+  const lines: ReferenceLine[] = [];
+  if (has('store')) lines.push({ group: 'temperature', label: 'Store minimum (HSE L8)', value: LEGIONELLA_LIMITS.storeMinC, tone: 'danger' });
+  if (has('hw-return') || has('outlet')) lines.push({ group: 'temperature', label: 'Return and outlet minimum (HSG274)', value: LEGIONELLA_LIMITS.returnMinC, tone: 'danger' });
+  if (has('ratio')) {
+    lines.push({ group: 'flue-ratio', label: 'Sound combustion', value: FLUE_LIMITS.ratioSound, tone: 'neutral' });
+    lines.push({ group: 'flue-ratio', label: 'Not left in use', value: FLUE_LIMITS.ratioAction, tone: 'danger' });
+  }
+  if (has('co')) lines.push({ group: 'flue-co', label: 'CO limit', value: FLUE_LIMITS.coMaxPpm, tone: 'neutral' });
   return lines;
 }
 

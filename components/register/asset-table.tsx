@@ -26,7 +26,7 @@ interface Props {
   editing: boolean;
 }
 
-// Sortable columns are the orders the API offers (server/services/asset-search.ts ASSET_SORTS).
+// Sortable columns are the orders the API offers (ASSET_SORTS in shared/schemas/queries.ts).
 /** The register as a dense table on wide screens; in editing mode a few fields become inputs with a save per row. */
 export function AssetTable({ rows, sort, onSort, paging, busy, editing }: Props) {
   const router = useRouter();

@@ -43,6 +43,7 @@ export const ATTRIBUTE_META: Record<string, { label: string; unit?: string; hint
   fuel: { label: 'Fuel' },
   ratedOutputKw: { label: 'Rated output', unit: 'kW' },
   flowSetpointC: { label: 'Flow setpoint', unit: '°C' },
+  burnerPressureMbar: { label: 'Burner pressure setting', unit: 'mbar', hint: 'From the data plate or the commissioning sheet.' },
   duty: { label: 'Duty arrangement' },
   circuit: { label: 'Circuit served' },
   normalPosition: { label: 'Position with no signal' },

@@ -11,6 +11,7 @@ import { SiteAccessDialog } from '@/components/team/site-access-dialog';
 import { ROLE_OPTIONS, memberStatus } from '@/components/team/team-vocabulary';
 import { errorMessage } from '@/hooks/api/request';
 import { useChangeUserMutation, useResendInviteMutation } from '@/hooks/api/use-team';
+import { may } from '@/shared/rules/permissions';
 import { ROLE_LABELS, type Role } from '@/shared/rules/roles';
 import type { ChangeUserInput } from '@/shared/schemas/team';
 import type { TeamMember } from '@/shared/types/team';
@@ -43,6 +44,8 @@ export function MemberCard({ member, isSelf, siteNames }: { member: TeamMember; 
       setPending(null);
     } catch { /* shown in the dialog */ }
   };
+  // Only those without every site have a list of sites to show and change.
+  const limited = !may(member, 'seeEverySite');
   const sites = member.siteIds.map((id) => siteNames.get(id) ?? `Site ${id}`);
 
   return (
@@ -56,14 +59,14 @@ export function MemberCard({ member, isSelf, siteNames }: { member: TeamMember; 
         </View>
         <Badge tone={status.tone} icon={status.icon} label={status.word} testID={`member-status-${member.id}`} />
       </View>
-      {member.role === 'viewer' ? (
+      {limited ? (
         <Text variant="small" testID={`member-sites-${member.id}`}>{sites.length ? `Sites: ${sites.join(', ')}` : 'Sites: none yet — they see nothing until given a site.'}</Text>
       ) : null}
       <View style={styles.actions}>
         <View style={{ flexGrow: 1, flexBasis: 200 }}>
           <SelectField label={`Role of ${member.name}`} hideLabel value={member.role} options={ROLE_OPTIONS} onChange={askRole} disabled={isSelf || !member.active} testID={`member-role-${member.id}`} />
         </View>
-        {member.role === 'viewer' ? <Button title="Site access" variant="secondary" onPress={() => setSitesOpen(true)} testID={`member-sites-edit-${member.id}`} /> : null}
+        {limited ? <Button title="Site access" variant="secondary" onPress={() => setSitesOpen(true)} testID={`member-sites-edit-${member.id}`} /> : null}
         {member.invitePending && member.active ? (
           <Button title={resend.isSuccess ? 'Invitation resent' : 'Send new invitation'} variant="secondary" busy={resend.isPending} onPress={() => resend.mutate(member.id)} testID={`member-resend-${member.id}`} />
         ) : null}
@@ -81,7 +84,7 @@ export function MemberCard({ member, isSelf, siteNames }: { member: TeamMember; 
         onConfirm={() => void confirm()}
         onCancel={() => setPending(null)}
       />
-      {member.role === 'viewer' ? <SiteAccessDialog member={member} visible={sitesOpen} onClose={() => setSitesOpen(false)} /> : null}
+      {limited ? <SiteAccessDialog member={member} visible={sitesOpen} onClose={() => setSitesOpen(false)} /> : null}
     </View>
   );
 }

@@ -1,30 +1,10 @@
 /**
- * Isoledger's design tokens: one place for colours, spacing, type and breakpoints.
+ * Isoledger's design tokens: one place for colours (palette.ts, light and dark), spacing, type and breakpoints.
  * Safety colours keep their ISO 3864-1 meanings: red danger/prohibition, yellow caution,
  * blue mandatory action, green safe condition. State is never shown by colour alone.
  */
-export const colors = {
-  ink: '#14323d',
-  inkMuted: '#4a626b',
-  paper: '#f4f2ec',
-  surface: '#ffffff',
-  surfaceSunk: '#e9e6dc',
-  line: '#cfcabb',
-  brand: '#1f6f78',
-  brandInk: '#ffffff',
-  focus: '#0b57d0',
-  danger: '#b3261e',
-  dangerSoft: '#fbe3e1',
-  caution: '#f2c200',
-  cautionInk: '#2b2300',
-  cautionSoft: '#fff5c7',
-  mandatory: '#1b4f9c',
-  mandatorySoft: '#e1ebf8',
-  safe: '#2e7d32',
-  safeSoft: '#e2f1e3',
-  /** Dims the screen behind a dialog. */
-  scrim: 'rgba(20, 50, 61, 0.6)',
-} as const;
+export { colors } from '@/components/theme/colors';
+export { printColors, type ColorScheme } from '@/components/theme/palette';
 
 export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32, xxxl: 48 } as const;
 export const radius = { sm: 4, md: 8, lg: 14, pill: 999 } as const;
@@ -48,5 +28,6 @@ export const layout = {
   wideFrom: 900,
   maxContentWidth: 1200,
   sideNavWidth: 232,
-  minTouch: 44,
+  /** Gloved fingers: WCAG 2.1 SC 2.5.5 asks 44 CSS px; we use 48 (Material's minimum target). */
+  minTouch: 48,
 } as const;

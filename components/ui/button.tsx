@@ -7,7 +7,7 @@ type Variant = 'primary' | 'secondary' | 'danger' | 'quiet';
 const variants: Record<Variant, { bg: string; fg: string; border: string }> = {
   primary: { bg: colors.brand, fg: colors.brandInk, border: colors.brand },
   secondary: { bg: colors.surface, fg: colors.ink, border: colors.ink },
-  danger: { bg: colors.danger, fg: '#ffffff', border: colors.danger },
+  danger: { bg: colors.danger, fg: colors.brandInk, border: colors.danger },
   quiet: { bg: 'transparent', fg: colors.brand, border: 'transparent' },
 };
 

@@ -10,7 +10,7 @@ type IconName = ComponentProps<typeof MaterialCommunityIcons>['name'];
 // Each tone carries an icon and a word as well as a colour (ISO 3864-1 meanings), so colour is never the only cue.
 const tones: Record<Tone, { bg: string; border: string; fg: string; icon: IconName; word: string }> = {
   danger: { bg: colors.dangerSoft, border: colors.danger, fg: colors.ink, icon: 'alert-octagon', word: 'Danger' },
-  caution: { bg: colors.cautionSoft, border: colors.caution, fg: colors.cautionInk, icon: 'alert', word: 'Caution' },
+  caution: { bg: colors.cautionSoft, border: colors.caution, fg: colors.ink, icon: 'alert', word: 'Caution' },
   mandatory: { bg: colors.mandatorySoft, border: colors.mandatory, fg: colors.ink, icon: 'information', word: 'Required' },
   safe: { bg: colors.safeSoft, border: colors.safe, fg: colors.ink, icon: 'check-circle', word: 'OK' },
   info: { bg: colors.surfaceSunk, border: colors.line, fg: colors.ink, icon: 'information-outline', word: 'Note' },

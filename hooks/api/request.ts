@@ -17,6 +17,8 @@ let token: string | null = null;
 let onUnauthenticated: (() => void) | null = null;
 
 export const setRequestToken = (value: string | null) => { token = value; };
+/** The session token in use, if any (the outbox records whose actions it holds). */
+export const currentToken = () => token;
 export const setUnauthenticatedHandler = (fn: (() => void) | null) => { onUnauthenticated = fn; };
 
 // Same origin on the web; a native build points at the server with EXPO_PUBLIC_API_URL.

@@ -1,6 +1,7 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ImagePickerAsset } from 'expo-image-picker';
 import { fetchBlob, request } from '@/hooks/api/request';
+import { sendOrQueue } from '@/hooks/offline/send-or-queue';
 import { plantRoomKeys } from '@/hooks/api/use-plant-rooms';
 import { photoFormData } from '@/hooks/api/use-photos';
 import { siteKeys } from '@/hooks/api/use-sites';
@@ -93,7 +94,8 @@ export function useArchiveAssetMutation() {
 export function useAddAssetPhotoMutation(id: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (asset: ImagePickerAsset) => request<Photo>(`/assets/${id}/photos`, { method: 'POST', body: photoFormData(asset) }),
+    mutationFn: (asset: ImagePickerAsset) =>
+      sendOrQueue<Photo>(`/assets/${id}/photos`, { method: 'POST', body: photoFormData(asset) }, { kind: 'photo', summary: 'add a photo', assetId: id }),
     onSuccess: () => qc.invalidateQueries({ queryKey: assetKeys.all }),
   });
 }

@@ -1,6 +1,7 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { fetchBlob, request } from '@/hooks/api/request';
 import { BOARD_REFRESH_SECONDS } from '@/shared/rules/board';
+import { queryString } from '@/shared/rules/query-string';
 import type { BoardQuery, BoardResponse } from '@/shared/types/board';
 
 export const boardKeys = {
@@ -8,19 +9,12 @@ export const boardKeys = {
   view: (query: BoardQuery) => [...boardKeys.all, 'view', query] as const,
 };
 
-/** The board's query string; empty and unset filters are left out so the server reads "every live tag". */
-export function boardQueryString(query: BoardQuery): string {
-  const params = new URLSearchParams();
-  for (const [k, v] of Object.entries(query)) if (v !== undefined && v !== null && v !== '') params.set(k, String(v));
-  const text = params.toString();
-  return text ? `?${text}` : '';
-}
 
 /** The live board: polled so a tag raised anywhere appears without a reload, and refreshed when the window regains focus. */
 export function useBoardQuery(query: BoardQuery) {
   return useQuery({
     queryKey: boardKeys.view(query),
-    queryFn: () => request<BoardResponse>(`/board${boardQueryString(query)}`),
+    queryFn: () => request<BoardResponse>(`/board${queryString({ ...query })}`),
     refetchInterval: BOARD_REFRESH_SECONDS * 1000,
     refetchIntervalInBackground: false,
     refetchOnWindowFocus: true,
@@ -31,5 +25,5 @@ export function useBoardQuery(query: BoardQuery) {
 /** The same view as CSV, every page; paging is the server's to decide for an export. */
 export function fetchBoardCsv(query: BoardQuery): Promise<Blob> {
   const { page: _page, pageSize: _pageSize, ...filters } = query;
-  return fetchBlob(`/api/board.csv${boardQueryString(filters)}`);
+  return fetchBlob(`/api/board.csv${queryString({ ...filters })}`);
 }

@@ -1,7 +1,10 @@
 import { useMutation } from '@tanstack/react-query';
 import { fetchBlob } from '@/hooks/api/request';
 
-export type LabelLayout = 'sheet' | 'roll';
+import { queryString } from '@/shared/rules/query-string';
+import type { LabelLayout } from '@/shared/schemas/queries';
+
+export type { LabelLayout };
 export interface LabelPdfSelection {
   assetIds?: number[];
   plantRoomId?: number;
@@ -9,11 +12,10 @@ export interface LabelPdfSelection {
 }
 
 export function labelPdfPath(selection: LabelPdfSelection, layout: LabelLayout) {
-  const params = new URLSearchParams({ layout });
-  if (selection.assetIds?.length) params.set('assetIds', selection.assetIds.join(','));
-  else if (selection.plantRoomId) params.set('plantRoomId', String(selection.plantRoomId));
-  else if (selection.siteId) params.set('siteId', String(selection.siteId));
-  return `/api/labels.pdf?${params.toString()}`;
+  // One selection only, the narrowest given: items, else a plant room, else a site.
+  const { assetIds, plantRoomId, siteId } = selection;
+  const narrowest = assetIds?.length ? { assetIds } : plantRoomId ? { plantRoomId } : { siteId };
+  return `/api/labels.pdf${queryString({ layout, ...narrowest })}`;
 }
 
 /** Downloads a label PDF (A4 sheet of 21, or one per page for a 62 mm roll printer). */

@@ -1,7 +1,8 @@
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { request } from '@/hooks/api/request';
 import { assetKeys } from '@/hooks/api/use-assets';
 import type { Asset } from '@/shared/types/register';
+import type { ListResponse } from '@/shared/types/user';
 
 export const labelKeys = {
   all: ['labels'] as const,
@@ -10,7 +11,24 @@ export const labelKeys = {
 };
 
 export function useLabelQuery(code: string) {
-  return useQuery({ queryKey: labelKeys.code(code), queryFn: () => request<Asset>(`/labels/${encodeURIComponent(code)}`), enabled: !!code, staleTime: 0 });
+  const qc = useQueryClient();
+  return useQuery({
+    queryKey: labelKeys.code(code),
+    queryFn: () => request<Asset>(`/labels/${encodeURIComponent(code)}`),
+    enabled: !!code,
+    staleTime: 0,
+    // A label never looked up before still opens with no signal when its plant room's items were seen recently.
+    initialData: () => cachedAssetByLabel(qc, code),
+    initialDataUpdatedAt: 0,
+  });
+}
+
+function cachedAssetByLabel(qc: QueryClient, code: string): Asset | undefined {
+  for (const [, data] of qc.getQueriesData<Asset | ListResponse<Asset>>({ queryKey: assetKeys.all })) {
+    const found = data && ('items' in data ? data.items : [data]).find((a) => a.labelCode === code);
+    if (found) return found;
+  }
+  return undefined;
 }
 
 export function useRetiredLabelsQuery(assetId: number) {

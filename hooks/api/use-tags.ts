@@ -3,6 +3,8 @@ import type { ImagePickerAsset } from 'expo-image-picker';
 import { photoFormData } from '@/hooks/api/use-photos';
 import { RequestError, request } from '@/hooks/api/request';
 import { assetKeys } from '@/hooks/api/use-assets';
+import { sendOrQueue } from '@/hooks/offline/send-or-queue';
+import type { OutboxKind } from '@/hooks/offline/outbox-types';
 import type { TagStatus } from '@/shared/rules/tags';
 import type {
   ClearInAbsenceInput, ClearTagInput, ExtendTagInput, HandoverAcceptInput, HandoverOfferInput, ProofInput, RaiseTagInput, ReassignInAbsenceInput,
@@ -74,7 +76,6 @@ function keyFor(variables: object, action: string): string {
   if (!key) submissionKeys.set(variables, (key = newIdempotencyKey(action)));
   return key;
 }
-const retryLostConnection = (count: number, err: unknown) => err instanceof RequestError && err.status === 0 && count < 2;
 
 export interface RaiseTagVariables {
   input: RaiseTagInput;
@@ -84,20 +85,25 @@ export interface RaiseTagVariables {
 export function useRaiseTagMutation(assetId: number) {
   const changed = useTagChanged();
   return useMutation({
+    // With no signal the raise waits in the outbox with the same key; the server answers a repeat with the tag it already made.
     mutationFn: ({ input, idempotencyKey }: RaiseTagVariables) =>
-      request<Tag>(`/assets/${assetId}/tags`, { method: 'POST', body: input, headers: { 'Idempotency-Key': idempotencyKey } }),
-    // A lost connection is retried with the same key; the server answers a repeat with the tag it already made.
-    retry: retryLostConnection,
+      sendOrQueue<Tag>(`/assets/${assetId}/tags`, { method: 'POST', body: input, headers: { 'Idempotency-Key': idempotencyKey } }, {
+        kind: 'raise-tag',
+        summary: `raise ${input.kind} tag: ${input.reason}`,
+        assetId,
+      }),
+    // A dropped connection is tried again with the same key before the raise goes to the outbox.
+    retry: (count, err) => err instanceof RequestError && err.status === 0 && err.code !== 'queued' && count < 2,
     onSuccess: changed,
   });
 }
 
-function useTagAction<I extends object>(id: number, action: string) {
+/** A tag action; with no signal it waits in the outbox, with its Idempotency-Key, and the form is told it has not happened yet. */
+function useTagAction<I extends object>(id: number, action: string, kind: OutboxKind, summary: string) {
   const changed = useTagChanged();
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: I) => request<Tag>(`/tags/${id}/${action}`, { method: 'POST', body: input, headers: { 'Idempotency-Key': keyFor(input, action.replace(/\//g, '-')) } }),
-    retry: retryLostConnection,
+    mutationFn: (input: I) => sendOrQueue<Tag>(`/tags/${id}/${action}`, { method: 'POST', body: input, headers: { 'Idempotency-Key': keyFor(input, action.replace(/\//g, '-')) } }, { kind, summary: `${summary} (tag ${id})`, tagId: id }),
     onSuccess: async (tag) => {
       await changed(tag);
       await qc.invalidateQueries({ queryKey: tagKeys.notices() });
@@ -105,18 +111,18 @@ function useTagAction<I extends object>(id: number, action: string) {
   });
 }
 
-export const useClearTagMutation = (id: number) => useTagAction<ClearTagInput>(id, 'clear');
-export const useClearInAbsenceMutation = (id: number) => useTagAction<ClearInAbsenceInput>(id, 'clear-in-absence');
-export const useReassignInAbsenceMutation = (id: number) => useTagAction<ReassignInAbsenceInput>(id, 'reassign-in-absence');
-export const useExtendTagMutation = (id: number) => useTagAction<ExtendTagInput>(id, 'extend');
-export const useProveTagMutation = (id: number) => useTagAction<ProofInput>(id, 'prove');
+export const useClearTagMutation = (id: number) => useTagAction<ClearTagInput>(id, 'clear', 'tag-clear', 'clear the tag');
+export const useClearInAbsenceMutation = (id: number) => useTagAction<ClearInAbsenceInput>(id, 'clear-in-absence', 'tag-clear', 'clear the tag in the holder’s absence');
+export const useReassignInAbsenceMutation = (id: number) => useTagAction<ReassignInAbsenceInput>(id, 'reassign-in-absence', 'tag-handover', 'reassign the tag in the holder’s absence');
+export const useExtendTagMutation = (id: number) => useTagAction<ExtendTagInput>(id, 'extend', 'tag-extend', 'extend the tag');
+export const useProveTagMutation = (id: number) => useTagAction<ProofInput>(id, 'prove', 'tag-prove', 'record the proof of isolation');
 /** The holder names the colleague who is to take the tag; nothing changes hands until they accept. */
-export const useOfferHandoverMutation = (id: number) => useTagAction<HandoverOfferInput>(id, 'handover');
+export const useOfferHandoverMutation = (id: number) => useTagAction<HandoverOfferInput>(id, 'handover', 'tag-handover', 'offer the tag to a colleague');
 /** The named colleague accepts with the number of the lock they have just put on. */
-export const useAcceptHandoverMutation = (id: number) => useTagAction<HandoverAcceptInput>(id, 'handover/accept');
-export const useWithdrawHandoverMutation = (id: number) => useTagAction<Record<string, never>>(id, 'handover/withdraw');
-export const useAcknowledgeTagMutation = (id: number) => useTagAction<Record<string, never>>(id, 'acknowledge');
-export const useAddTagNoteMutation = (id: number) => useTagAction<{ text: string }>(id, 'notes');
+export const useAcceptHandoverMutation = (id: number) => useTagAction<HandoverAcceptInput>(id, 'handover/accept', 'tag-handover', 'accept the hand-over');
+export const useWithdrawHandoverMutation = (id: number) => useTagAction<Record<string, never>>(id, 'handover/withdraw', 'tag-handover', 'withdraw the hand-over offer');
+export const useAcknowledgeTagMutation = (id: number) => useTagAction<Record<string, never>>(id, 'acknowledge', 'tag-acknowledge', 'acknowledge what happened in your absence');
+export const useAddTagNoteMutation = (id: number) => useTagAction<{ text: string }>(id, 'notes', 'tag-note', 'add a note');
 
 /** Tags cleared or reassigned while the caller was away, not yet acknowledged. */
 export function useTagNoticesQuery(enabled = true) {
@@ -132,8 +138,8 @@ export function useTagColleaguesQuery(enabled = true) {
 export function useAddTagPhotoMutation(id: number) {
   const changed = useTagChanged();
   return useMutation({
-    mutationFn: (asset: ImagePickerAsset) => request<Tag>(`/tags/${id}/photos`, { method: 'POST', body: photoFormData(asset), headers: { 'Idempotency-Key': keyFor(asset, 'photo') } }),
-    retry: retryLostConnection,
+    mutationFn: (asset: ImagePickerAsset) =>
+      sendOrQueue<Tag>(`/tags/${id}/photos`, { method: 'POST', body: photoFormData(asset), headers: { 'Idempotency-Key': keyFor(asset, 'photo') } }, { kind: 'tag-photo', summary: `add a photo (tag ${id})`, tagId: id }),
     onSuccess: changed,
   });
 }

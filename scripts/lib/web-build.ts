@@ -3,12 +3,13 @@ import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { precompress } from '@/scripts/lib/precompress';
+import { addOfflineSupport } from '@/scripts/lib/web-offline';
 import { copyZxingWasm } from '@/scripts/lib/zxing-wasm';
 
 const ROOT = path.resolve(__dirname, '../..');
 const DIST = path.join(ROOT, 'dist');
 const STAMP = path.join(DIST, '.source-hash');
-const SOURCES = ['app', 'components', 'hooks', 'shared', 'assets', 'app.json', 'package-lock.json', 'metro.config.js', 'babel.config.js', 'scripts/lib/web-build.ts', 'scripts/lib/zxing-wasm.ts', 'scripts/lib/precompress.ts'];
+const SOURCES = ['app', 'components', 'hooks', 'shared', 'assets', 'app.json', 'package-lock.json', 'metro.config.js', 'babel.config.js', 'scripts/lib/web-build.ts', 'scripts/lib/zxing-wasm.ts', 'scripts/lib/precompress.ts', 'scripts/lib/web-offline.ts'];
 
 function hashTree(hash: crypto.Hash, target: string) {
   if (!fs.existsSync(target)) return;
@@ -28,7 +29,7 @@ export function sourceHash(): string {
 }
 
 /** Exports the web app with Expo (offline) into dist/, then copies what the scanner needs from node_modules. */
-export function buildWeb(log: (line: string) => void) {
+export async function buildWeb(log: (line: string) => void) {
   log('building the web app (expo export -p web)…');
   const started = Date.now();
   const result = spawnSync('npx', ['expo', 'export', '-p', 'web', '--output-dir', 'dist', '--clear'], {
@@ -37,7 +38,8 @@ export function buildWeb(log: (line: string) => void) {
     env: { ...process.env, EXPO_OFFLINE: '1', CI: '1', EXPO_NO_TELEMETRY: '1' },
   });
   if (result.status !== 0) throw new Error('expo export failed');
-  afterExport(DIST);
+  const precached = await afterExport(DIST);
+  log(`service worker precaches ${precached.count} files (${(precached.size / 1024 / 1024).toFixed(1)} MB)`);
   fs.writeFileSync(STAMP, sourceHash());
   log(`web app built in ${((Date.now() - started) / 1000).toFixed(1)} s`);
 }
@@ -46,10 +48,12 @@ export function buildWeb(log: (line: string) => void) {
  * The web scanner's QR reader (barcode-detector → zxing-wasm) would fetch its .wasm from a public CDN; we copy the
  * exact installed binary into the build and the app points the library at it (components/labels/zxing-setup.web.ts).
  */
-function afterExport(dist: string) {
+async function afterExport(dist: string) {
   copyZxingWasm(path.join(dist, 'wasm'));
+  const precached = await addOfflineSupport(dist);
   // Last, so that every file written above is compressed too.
   precompress(dist);
+  return precached;
 }
 
 export async function buildWebIfChanged(log: (line: string) => void) {
@@ -58,5 +62,5 @@ export async function buildWebIfChanged(log: (line: string) => void) {
     log('web app is up to date');
     return;
   }
-  buildWeb(log);
+  await buildWeb(log);
 }

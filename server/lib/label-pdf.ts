@@ -4,8 +4,7 @@
 import PDFDocument from 'pdfkit';
 import QRCode from 'qrcode';
 import { formatLabelCode } from '@/shared/rules/label-code';
-
-export type LabelLayout = 'sheet' | 'roll';
+import type { LabelLayout } from '@/shared/schemas/queries';
 
 export interface PlantLabel {
   code: string;

@@ -4,6 +4,7 @@ import { enqueueMail, recipientsWanting } from '@/server/mail/outbox';
 import { overdueReviews } from '@/server/services/procedure-reviews.service';
 import { DIGEST_HOUR, DIGEST_LAST_HOUR } from '@/shared/rules/notifications';
 import { endOfDayInZone, localDate, zonedTimeToUtc } from '@/shared/rules/time-zone';
+import { rolesWith } from '@/shared/rules/permissions';
 
 interface DigestTagRow { id: number; plantId: string; assetName: string; siteName: string; kind: string; holderName: string; expiresAt: Date | string }
 
@@ -38,7 +39,7 @@ export async function runDigests(now: Date, opts: { sequelize: Sequelize; name?:
     const [y, m, d] = date.split('-').map(Number);
     if (now < zonedTimeToUtc(y, m, d, DIGEST_HOUR, 0, 0, timeZone) || now >= zonedTimeToUtc(y, m, d, DIGEST_LAST_HOUR, 0, 0, timeZone)) continue;
 
-    const people = await recipientsWanting(sequelize, organisationId, 'digest', { roles: ['supervisor', 'admin'] });
+    const people = await recipientsWanting(sequelize, organisationId, 'digest', { roles: rolesWith('receiveOrganisationMail') });
     if (!people.length) continue;
     const done = new Set(
       (await sequelize.query<{ userId: number }>('SELECT user_id AS userId FROM digest_runs WHERE time_zone = ? AND local_date = ? AND user_id IN (?)', {

@@ -6,6 +6,7 @@ import { Site } from '@/server/models/site.model';
 import { Tag } from '@/server/models/tag.model';
 import { User } from '@/server/models/user.model';
 import { enqueueMail, recipientsWanting, type OutboxMail } from '@/server/mail/outbox';
+import { rolesWith } from '@/shared/rules/permissions';
 
 export type TagMailEvent = 'raised' | 'cleared' | 'cleared-in-absence' | 'handed-over' | 'reassigned-in-absence';
 
@@ -27,7 +28,6 @@ export interface TagSnapshot {
   lockNumber: string;
 }
 
-const SUPERVISORY = ['supervisor', 'admin'];
 
 /**
  * Queues the e-mails a tag event causes, in the event's own transaction:
@@ -76,7 +76,7 @@ export async function enqueueTagMail(
   if (ownerId && ownerId !== actor.id) {
     const owner = inAbsence
       ? await User.findOne({ where: { id: ownerId, organisationId: tag.organisationId }, transaction })
-      : (await recipientsWanting(sequelize, tag.organisationId, 'my_tags', { userIds: [ownerId], roles: ['engineer', ...SUPERVISORY], transaction }))[0];
+      : (await recipientsWanting(sequelize, tag.organisationId, 'my_tags', { userIds: [ownerId], roles: rolesWith('receiveOwnTagMail'), transaction }))[0];
     if (owner) {
       personal.add(owner.id);
       const kind = event === 'handed-over' ? 'my-tag-handed-over' : event === 'reassigned-in-absence' ? 'my-tag-reassigned-in-absence' : 'my-tag-cleared-in-absence';
@@ -87,7 +87,7 @@ export async function enqueueTagMail(
   if (event !== 'handed-over' && event !== 'reassigned-in-absence') {
     const setting = event === 'raised' ? 'raised' : 'cleared';
     const kind = event === 'raised' ? 'tag-raised' : event === 'cleared' ? 'tag-cleared' : 'tag-cleared-in-absence';
-    const people = await recipientsWanting(sequelize, tag.organisationId, setting, { roles: SUPERVISORY, transaction });
+    const people = await recipientsWanting(sequelize, tag.organisationId, setting, { roles: rolesWith('receiveOrganisationMail'), transaction });
     for (const p of people) {
       if (p.id === actor.id || personal.has(p.id)) continue;
       mails.push({ organisationId: tag.organisationId, kind, toEmail: p.email, toUserId: p.id, payload: { ...base, recipientName: p.name } });

@@ -69,14 +69,6 @@ export function ensurePermission(actor: AuthUser, permission: RolePermission, me
   if (!may(actor, permission)) throw forbidden(message);
 }
 
-/** @deprecated name a permission of shared/rules/permissions.ts with `requirePermission` instead. */
-export const requireRole =
-  (...roles: Role[]): RequestHandler =>
-  (req, _res, next) => {
-    if (!req.user) return next(unauthenticated());
-    if (!roles.includes(req.user.role)) return next(forbidden());
-    next();
-  };
 
 /** The signed-in user; only call behind `auth`. */
 export function currentUser(req: { user?: AuthUser }): AuthUser {

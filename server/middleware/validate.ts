@@ -1,7 +1,7 @@
 import type { Request, RequestHandler } from 'express';
 import { ValidationError, isSchema, type AnySchema } from 'yup';
 import { HttpError } from '@/server/lib/http-error';
-import { parseId } from '@/shared/rules/ids';
+import { parseId as parseIdOrNull } from '@/shared/rules/ids';
 import { fieldErrors } from '@/shared/schemas/field-errors';
 
 export interface RequestSchemas {
@@ -43,12 +43,15 @@ export const validate = (schemas: RequestSchemas | AnySchema): RequestHandler =>
   };
 };
 
-/** An id in the path (`:id` by default), as `validate({ params: idParams })` left it; 400 when it is not an id. */
-export function pathId(req: Request, name = 'id'): number {
-  const id = parseId(req.params[name]);
+/** An id from a path or query, or 400 naming it (the rule is shared/rules/ids.ts). */
+export function parseId(raw: unknown, name = 'id'): number {
+  const id = parseIdOrNull(raw);
   if (id === null) throw new HttpError(400, 'bad-id', `${name} must be a positive whole number.`, { [name]: `${name} must be a positive whole number.` });
   return id;
 }
+
+/** An id in the path (`:id` by default), as `validate({ params: idParams })` left it; 400 when it is not an id. */
+export const pathId = (req: Request, name = 'id'): number => parseId(req.params[name], name);
 
 /** The query string as `validate({ query })` cast it. */
 export const checkedQuery = <T>(req: Request) => req.query as unknown as T;

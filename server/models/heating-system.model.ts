@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import type { GlycolKind } from '@/shared/calc';
 import type { User } from './user.model';
 
 /** Design values of one heating system: the assets on a site whose `system` text is this name. SI units. */
@@ -16,6 +17,12 @@ export class HeatingSystem extends Model<InferAttributes<HeatingSystem>, InferCr
   declare maxFlowTemperatureC: number | null;
   declare fillTemperatureC: number | null;
   declare preChargeMarginBar: number | null;
+  declare glycolKind: GlycolKind | null;
+  declare glycolPercent: number | null;
+  declare compensationOutsideLowC: number | null;
+  declare compensationFlowAtLowC: number | null;
+  declare compensationOutsideHighC: number | null;
+  declare compensationFlowAtHighC: number | null;
   declare updatedBy: number;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -39,6 +46,12 @@ export class HeatingSystem extends Model<InferAttributes<HeatingSystem>, InferCr
         maxFlowTemperatureC: measured(),
         fillTemperatureC: measured(),
         preChargeMarginBar: measured(),
+        glycolKind: { type: DataTypes.STRING(20), allowNull: true },
+        glycolPercent: measured(),
+        compensationOutsideLowC: { ...measured(), field: 'compensation_outside_low_c' },
+        compensationFlowAtLowC: { ...measured(), field: 'compensation_flow_at_low_c' },
+        compensationOutsideHighC: { ...measured(), field: 'compensation_outside_high_c' },
+        compensationFlowAtHighC: { ...measured(), field: 'compensation_flow_at_high_c' },
         updatedBy: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

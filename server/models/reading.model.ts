@@ -1,8 +1,36 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import type { CheckFlagLevel, CheckResult } from '@/shared/calc';
+import type { CheckFlagLevel, CheckResult, InhibitorResult, WaterAppearance } from '@/shared/calc';
 import type { CheckSettings, ReadingFlag, SurfaceTemperature } from '@/shared/types/readings';
 import type { Asset } from './asset.model';
 import type { User } from './user.model';
+
+// Columns of migration 0009, named outright: underscoring would split "USPerCm" and "O2" its own way.
+const VISIT_FIELDS = {
+  gaugeHeightM: 'gauge_height_m',
+  outsideTemperatureC: 'outside_temperature_c',
+  gasStandingPressurePa: 'gas_standing_pressure_pa',
+  gasWorkingPressurePa: 'gas_working_pressure_pa',
+  burnerPressurePa: 'burner_pressure_pa',
+  flueO2Percent: 'flue_o2_percent',
+  flueCo2Percent: 'flue_co2_percent',
+  flueCoPpm: 'flue_co_ppm',
+  flueTemperatureC: 'flue_temperature_c',
+  combustionEfficiencyPercent: 'combustion_efficiency_percent',
+  storeTemperatureC: 'store_temperature_c',
+  hotWaterReturnTemperatureC: 'hot_water_return_temperature_c',
+  outletTemperatureC: 'outlet_temperature_c',
+  outletRunSeconds: 'outlet_run_seconds',
+  waterPh: 'water_ph',
+  conductivityUSPerCm: 'conductivity_us_per_cm',
+  unitCutInPressureGaugePa: 'unit_cut_in_pressure_gauge_pa',
+  unitCutOutPressureGaugePa: 'unit_cut_out_pressure_gauge_pa',
+} as const;
+
+const visitColumns = () => ({
+  ...Object.fromEntries(Object.entries(VISIT_FIELDS).map(([k, field]) => [k, { type: DataTypes.DOUBLE, allowNull: true, field }])),
+  inhibitorResult: { type: DataTypes.STRING(20), allowNull: true, field: 'inhibitor_result' },
+  waterAppearance: { type: DataTypes.STRING(20), allowNull: true, field: 'water_appearance' },
+}) as unknown as Record<keyof typeof VISIT_FIELDS | 'inhibitorResult' | 'waterAppearance', { type: DataTypes.DataType; allowNull: true; field: string }>;
 
 /** One set of readings on a plant item, in SI. Append-only: corrections are new rows that supersede. */
 export class Reading extends Model<InferAttributes<Reading>, InferCreationAttributes<Reading>> {
@@ -16,6 +44,26 @@ export class Reading extends Model<InferAttributes<Reading>, InferCreationAttrib
   declare systemPressureGaugePa: number | null;
   declare pumpInletPressureGaugePa: number | null;
   declare pumpOutletPressureGaugePa: number | null;
+  declare gaugeHeightM: number | null;
+  declare outsideTemperatureC: number | null;
+  declare gasStandingPressurePa: number | null;
+  declare gasWorkingPressurePa: number | null;
+  declare burnerPressurePa: number | null;
+  declare flueO2Percent: number | null;
+  declare flueCo2Percent: number | null;
+  declare flueCoPpm: number | null;
+  declare flueTemperatureC: number | null;
+  declare combustionEfficiencyPercent: number | null;
+  declare storeTemperatureC: number | null;
+  declare hotWaterReturnTemperatureC: number | null;
+  declare outletTemperatureC: number | null;
+  declare outletRunSeconds: number | null;
+  declare inhibitorResult: InhibitorResult | null;
+  declare waterPh: number | null;
+  declare conductivityUSPerCm: number | null;
+  declare waterAppearance: WaterAppearance | null;
+  declare unitCutInPressureGaugePa: number | null;
+  declare unitCutOutPressureGaugePa: number | null;
   declare surfaceTemperatures: SurfaceTemperature[];
   declare note: string;
   declare results: CheckResult[];
@@ -25,6 +73,8 @@ export class Reading extends Model<InferAttributes<Reading>, InferCreationAttrib
   declare supersedesId: number | null;
   declare correctionReason: string | null;
   declare createdBy: number;
+  /** The client's Idempotency-Key, so a set sent twice (an outbox retry) is stored once. */
+  declare idempotencyKey: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare asset?: NonAttribute<Asset>;
   declare creator?: NonAttribute<User>;
@@ -46,6 +96,7 @@ export class Reading extends Model<InferAttributes<Reading>, InferCreationAttrib
         systemPressureGaugePa: measured(),
         pumpInletPressureGaugePa: measured(),
         pumpOutletPressureGaugePa: measured(),
+        ...visitColumns(),
         surfaceTemperatures: { type: DataTypes.JSON, allowNull: false },
         note: { type: DataTypes.TEXT, allowNull: false },
         results: { type: DataTypes.JSON, allowNull: false },
@@ -55,6 +106,7 @@ export class Reading extends Model<InferAttributes<Reading>, InferCreationAttrib
         supersedesId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         correctionReason: { type: DataTypes.STRING(500), allowNull: true },
         createdBy: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        idempotencyKey: { type: DataTypes.STRING(100), allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'readings', underscored: true, updatedAt: false },

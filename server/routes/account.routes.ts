@@ -19,18 +19,18 @@ export function accountRoutes({ sequelize, config }: AppContext) {
   // The same allowance as sign-in, so the forms cannot be used to flood an inbox or probe for tokens.
   const resetLimits = accountAndAddressLimits(config, 'reset', { countAll: true });
   const setLimit = attemptLimiter(config, 'set-password', addressKey);
-  router.post('/auth/password/reset-request', ...resetLimits, validate(resetRequestSchema), (req, res) => {
+  router.post('/auth/password/reset-request', ...resetLimits, validate({ body: resetRequestSchema }), (req, res) => {
     // Answered before any work is done, so a known address and an unknown one take the same time.
     res.status(202).json(RESET_REQUEST_ANSWER);
     afterResponse('password reset request', () => requestPasswordReset(sequelize, req.body, req.ip ?? null));
   });
-  router.post('/auth/password/set', setLimit, validate(setPasswordSchema), async (req, res) => {
+  router.post('/auth/password/set', setLimit, validate({ body: setPasswordSchema }), async (req, res) => {
     res.json(await setPasswordWithToken(sequelize, config, req.body, req.ip ?? null));
   });
   router.get('/me/settings', auth(config.jwtSecret), async (req, res) => {
     res.json(await getMySettings(currentUser(req)));
   });
-  router.patch('/me/settings', auth(config.jwtSecret), validate(mySettingsSchema), async (req, res) => {
+  router.patch('/me/settings', auth(config.jwtSecret), validate({ body: mySettingsSchema }), async (req, res) => {
     res.json(await updateMySettings(sequelize, currentUser(req), req.body));
   });
   return router;

@@ -2,56 +2,53 @@ import { Router } from 'express';
 import type { AppContext } from '@/server/app';
 import { MAX_PHOTO_BYTES } from '@/server/lib/photo-processing';
 import { requireFile, singleFileUpload } from '@/server/lib/uploads';
-import { auth, currentUser, requireRole } from '@/server/middleware/auth';
-import { validate } from '@/server/middleware/validate';
+import { auth, currentUser, requirePermission } from '@/server/middleware/auth';
+import { checkedQuery, pathId, validate } from '@/server/middleware/validate';
 import { exportRegisterCsv, importRegisterCsv } from '@/server/services/asset-import.service';
-import { readAssetListFilters } from '@/server/services/asset-search';
 import { archiveAsset, createAsset, getAsset, listAssets, updateAsset } from '@/server/services/assets.service';
 import { addPhoto } from '@/server/services/photos.service';
-import { parseId } from '@/server/services/register-access';
 import { readPaging } from '@/shared/rules/paging';
 import { localDate } from '@/shared/rules/time-zone';
+import { assetListQuery, importQuery, type AssetListQuery } from '@/shared/schemas/queries';
 import { assetPatchSchema } from '@/shared/schemas/register';
+import { idParams } from '@/shared/schemas/request';
 
 const MAX_IMPORT_BYTES = 5 * 1024 * 1024;
 
 export function assetsRoutes({ config, sequelize, storage }: AppContext) {
   const router = Router();
-  const editors = requireRole('admin', 'supervisor', 'engineer');
-  const supervisory = requireRole('admin', 'supervisor');
   // Auth on each route rather than router.use: other routers serve paths under the same prefixes.
   const signedIn = auth(config.jwtSecret);
 
-  router.get('/assets/export.csv', signedIn, async (req, res) => {
-    const { siteId, plantRoomId, type } = readAssetListFilters(req.query);
+  router.get('/assets/export.csv', signedIn, validate({ query: assetListQuery }), async (req, res) => {
+    const { siteId, plantRoomId, type } = checkedQuery<AssetListQuery>(req);
     const csv = await exportRegisterCsv(currentUser(req), { siteId, plantRoomId, type });
     res.set('Content-Disposition', `attachment; filename="isoledger-register-${localDate(new Date(), 'UTC')}.csv"`);
     res.type('text/csv; charset=utf-8').send(csv);
   });
-  // dryRun unless `dryRun=false` is said outright: a preview never writes.
-  router.post('/assets/import', signedIn, supervisory, singleFileUpload('file', MAX_IMPORT_BYTES, 'CSV file'), async (req, res) => {
+  router.post('/assets/import', signedIn, requirePermission('importRegister'), validate({ query: importQuery }), singleFileUpload('file', MAX_IMPORT_BYTES, 'CSV file'), async (req, res) => {
     const file = requireFile(req, 'file', 'CSV file');
-    res.json(await importRegisterCsv(currentUser(req), sequelize, file.buffer, req.query.dryRun !== 'false'));
+    res.json(await importRegisterCsv(currentUser(req), sequelize, file.buffer, checkedQuery<{ dryRun: boolean }>(req).dryRun));
   });
-  router.get('/assets', signedIn, async (req, res) => {
-    res.json(await listAssets(currentUser(req), readAssetListFilters(req.query), readPaging(req.query)));
+  router.get('/assets', signedIn, validate({ query: assetListQuery }), async (req, res) => {
+    res.json(await listAssets(currentUser(req), checkedQuery<AssetListQuery>(req), readPaging(req.query)));
   });
   // The body is checked whole in the service (fields and the type's attributes together, all errors at once).
-  router.post('/assets', signedIn, editors, async (req, res) => {
+  router.post('/assets', signedIn, requirePermission('addToRegister'), async (req, res) => {
     res.status(201).json(await createAsset(currentUser(req), req.body ?? {}));
   });
-  router.get('/assets/:id', signedIn, async (req, res) => {
-    res.json(await getAsset(currentUser(req), parseId(req.params.id)));
+  router.get('/assets/:id', signedIn, validate({ params: idParams }), async (req, res) => {
+    res.json(await getAsset(currentUser(req), pathId(req)));
   });
-  router.patch('/assets/:id', signedIn, editors, validate(assetPatchSchema), async (req, res) => {
-    res.json(await updateAsset(currentUser(req), parseId(req.params.id), req.body));
+  router.patch('/assets/:id', signedIn, requirePermission('addToRegister'), validate({ params: idParams, body: assetPatchSchema }), async (req, res) => {
+    res.json(await updateAsset(currentUser(req), pathId(req), req.body));
   });
-  router.post('/assets/:id/archive', signedIn, supervisory, async (req, res) => {
-    res.json(await archiveAsset(currentUser(req), parseId(req.params.id)));
+  router.post('/assets/:id/archive', signedIn, requirePermission('archiveRecords'), validate({ params: idParams }), async (req, res) => {
+    res.json(await archiveAsset(currentUser(req), pathId(req)));
   });
-  router.post('/assets/:id/photos', signedIn, editors, singleFileUpload('photo', MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
+  router.post('/assets/:id/photos', signedIn, requirePermission('addToRegister'), validate({ params: idParams }), singleFileUpload('photo', MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
     const file = requireFile(req, 'photo', 'photo');
-    res.status(201).json(await addPhoto(currentUser(req), storage!, { assetId: parseId(req.params.id) }, file, req.body?.caption));
+    res.status(201).json(await addPhoto(currentUser(req), storage!, { assetId: pathId(req) }, file, req.body?.caption));
   });
   return router;
 }

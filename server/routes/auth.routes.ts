@@ -10,7 +10,7 @@ export function authRoutes({ config }: AppContext) {
   const router = Router();
   const loginLimits = accountAndAddressLimits(config, 'sign-in', { message: 'Too many sign-in attempts. Wait a few minutes and try again.' });
 
-  router.post('/auth/login', ...loginLimits, validate(signInSchema), async (req, res) => {
+  router.post('/auth/login', ...loginLimits, validate({ body: signInSchema }), async (req, res) => {
     res.json(await signIn(req.body, config, req.ip ?? null));
   });
   router.post('/auth/logout', auth(config.jwtSecret), async (req, res) => {

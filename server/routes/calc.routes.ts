@@ -9,7 +9,7 @@ import { expansionVesselRequestSchema, type ExpansionVesselRequest } from '@/sha
 export function calcRoutes({ config }: AppContext) {
   const router = Router();
   router.use('/calc', auth(config.jwtSecret));
-  router.post('/calc/expansion-vessel', validate(expansionVesselRequestSchema), (req, res) => {
+  router.post('/calc/expansion-vessel', validate({ body: expansionVesselRequestSchema }), (req, res) => {
     res.json(expansionVesselCheck(req.body as ExpansionVesselRequest));
   });
   return router;

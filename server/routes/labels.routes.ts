@@ -1,43 +1,32 @@
 import { Router } from 'express';
 import type { AppContext } from '@/server/app';
-import { HttpError } from '@/server/lib/http-error';
-import { auth, currentUser } from '@/server/middleware/auth';
+import { auth, currentUser, requirePermission } from '@/server/middleware/auth';
+import { checkedQuery, pathId, validate } from '@/server/middleware/validate';
 import { getAsset } from '@/server/services/assets.service';
 import { assetIdForLabel, labelsPdf, replaceLabel, retiredLabels } from '@/server/services/labels.service';
-
-const idList = (raw: unknown): number[] =>
-  String(raw ?? '').split(',').map((s) => s.trim()).filter(Boolean).map((s) => {
-    const n = Number(s);
-    if (!Number.isSafeInteger(n) || n <= 0) throw new HttpError(400, 'bad-id', 'assetIds must be a comma-separated list of numbers.');
-    return n;
-  });
+import { labelsPdfQuery, type LabelsPdfQuery } from '@/shared/schemas/queries';
+import { idParams } from '@/shared/schemas/request';
 
 export function labelsRoutes({ config, sequelize }: AppContext) {
   const router = Router();
   const authed = auth(config.jwtSecret);
 
-  router.get('/labels.pdf', authed, async (req, res) => {
-    const q = req.query as Record<string, string | undefined>;
-    const layout = q.layout ?? 'sheet';
-    if (layout !== 'sheet' && layout !== 'roll') throw new HttpError(400, 'bad-layout', 'layout must be sheet or roll.');
-    const pdf = await labelsPdf(
-      currentUser(req),
-      { assetIds: q.assetIds ? idList(q.assetIds) : undefined, plantRoomId: q.plantRoomId ? Number(q.plantRoomId) : undefined, siteId: q.siteId ? Number(q.siteId) : undefined },
-      layout,
-      config.publicUrl,
-    );
+  router.get('/labels.pdf', authed, validate({ query: labelsPdfQuery }), async (req, res) => {
+    const { layout, ...selection } = checkedQuery<LabelsPdfQuery>(req);
+    const pdf = await labelsPdf(currentUser(req), selection, layout, config.publicUrl);
     res.type('application/pdf').set('Content-Disposition', `attachment; filename="isoledger-labels-${layout}.pdf"`).send(pdf);
   });
+  // The item's record itself, so the client can open it from this answer without asking again.
   router.get('/labels/:code', authed, async (req, res) => {
     const actor = currentUser(req);
     res.json(await getAsset(actor, await assetIdForLabel(actor, String(req.params.code))));
   });
-  router.post('/assets/:id/label/replace', authed, async (req, res) => {
-    res.json(await replaceLabel(sequelize, currentUser(req), Number(req.params.id)));
+  router.post('/assets/:id/label/replace', authed, requirePermission('replaceLabel'), validate({ params: idParams }), async (req, res) => {
+    res.json(await replaceLabel(sequelize, currentUser(req), pathId(req)));
   });
-  router.get('/assets/:id/label/retired', authed, async (req, res) => {
+  router.get('/assets/:id/label/retired', authed, validate({ params: idParams }), async (req, res) => {
     const actor = currentUser(req);
-    const asset = await getAsset(actor, Number(req.params.id));
+    const asset = await getAsset(actor, pathId(req));
     res.json(await retiredLabels(actor, asset.id));
   });
   return router;

@@ -1,8 +1,9 @@
 import { Router, type Response } from 'express';
 import type { AppContext } from '@/server/app';
 import { auth, currentUser } from '@/server/middleware/auth';
+import { pathId, validate } from '@/server/middleware/validate';
 import { readPhotoFile } from '@/server/services/photos.service';
-import { parseId } from '@/server/services/register-access';
+import { idParams } from '@/shared/schemas/request';
 
 /** Photos only for signed-in users of the owning organisation; the client fetches them with its token. */
 export function photosRoutes({ config, storage }: AppContext) {
@@ -11,11 +12,11 @@ export function photosRoutes({ config, storage }: AppContext) {
   const signedIn = auth(config.jwtSecret);
   // A stored photo never changes, so the browser may keep it; `private` keeps it out of shared caches.
   const sendJpeg = (res: Response, body: Buffer) => res.set('Cache-Control', 'private, max-age=86400, immutable').type('image/jpeg').send(body);
-  router.get('/photos/:id', signedIn, async (req, res) => {
-    sendJpeg(res, await readPhotoFile(currentUser(req), storage!, parseId(req.params.id), 'full'));
+  router.get('/photos/:id', signedIn, validate({ params: idParams }), async (req, res) => {
+    sendJpeg(res, await readPhotoFile(currentUser(req), storage!, pathId(req), 'full'));
   });
-  router.get('/photos/:id/thumbnail', signedIn, async (req, res) => {
-    sendJpeg(res, await readPhotoFile(currentUser(req), storage!, parseId(req.params.id), 'thumbnail'));
+  router.get('/photos/:id/thumbnail', signedIn, validate({ params: idParams }), async (req, res) => {
+    sendJpeg(res, await readPhotoFile(currentUser(req), storage!, pathId(req), 'thumbnail'));
   });
   return router;
 }

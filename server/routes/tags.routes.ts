@@ -1,7 +1,7 @@
 import { Router, type Request } from 'express';
 import type { AppContext } from '@/server/app';
 import { auth, currentUser, requirePermission } from '@/server/middleware/auth';
-import { validate } from '@/server/middleware/validate';
+import { parseId, validate } from '@/server/middleware/validate';
 import { addTagNote, clearInAbsence, clearTag, extendTag, proveTag } from '@/server/services/tag-actions.service';
 import { acceptHandover, offerHandover, reassignInAbsence, withdrawHandover } from '@/server/services/tag-handover.service';
 import { idempotencyFor } from '@/server/services/tag-idempotency';
@@ -22,7 +22,7 @@ const keyOf = (req: Request, action: string, target: number, body: unknown = req
 export function tagsRoutes({ config, sequelize, storage }: AppContext) {
   const router = Router();
   const authed = auth(config.jwtSecret);
-  const id = (raw: unknown) => Number(raw);
+  const id = parseId;
 
   router.post('/assets/:id/tags', authed, requirePermission('raiseTag'), validate({ params: idParams, body: raiseTagSchema }), async (req, res) => {
     const assetId = id(req.params.id);

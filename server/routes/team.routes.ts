@@ -1,9 +1,9 @@
 import { Router } from 'express';
 import type { AppContext } from '@/server/app';
-import { auth, currentUser, requireRole } from '@/server/middleware/auth';
-import { validate } from '@/server/middleware/validate';
-import { parseId } from '@/server/services/register-access';
+import { auth, currentUser, requirePermission } from '@/server/middleware/auth';
+import { pathId, validate } from '@/server/middleware/validate';
 import { changeUser, inviteUser, resendInvite, setSiteAccess } from '@/server/services/team.service';
+import { idParams } from '@/shared/schemas/request';
 import { changeUserSchema, inviteUserSchema, siteAccessSchema } from '@/shared/schemas/team';
 
 /**
@@ -15,18 +15,18 @@ import { changeUserSchema, inviteUserSchema, siteAccessSchema } from '@/shared/s
  */
 export function teamRoutes({ sequelize, config }: AppContext) {
   const router = Router();
-  const admin = [auth(config.jwtSecret), requireRole('admin')];
-  router.post('/users/invite', ...admin, validate(inviteUserSchema), async (req, res) => {
+  const admin = [auth(config.jwtSecret), requirePermission('administerTeam')];
+  router.post('/users/invite', ...admin, validate({ body: inviteUserSchema }), async (req, res) => {
     res.status(201).json(await inviteUser(sequelize, currentUser(req), req.body, req.ip ?? null));
   });
-  router.post('/users/:id/invite', ...admin, async (req, res) => {
-    res.json(await resendInvite(sequelize, currentUser(req), parseId(req.params.id), req.ip ?? null));
+  router.post('/users/:id/invite', ...admin, validate({ params: idParams }), async (req, res) => {
+    res.json(await resendInvite(sequelize, currentUser(req), pathId(req), req.ip ?? null));
   });
-  router.patch('/users/:id', ...admin, validate(changeUserSchema), async (req, res) => {
-    res.json(await changeUser(sequelize, currentUser(req), parseId(req.params.id), req.body, req.ip ?? null));
+  router.patch('/users/:id', ...admin, validate({ params: idParams, body: changeUserSchema }), async (req, res) => {
+    res.json(await changeUser(sequelize, currentUser(req), pathId(req), req.body, req.ip ?? null));
   });
-  router.put('/users/:id/sites', ...admin, validate(siteAccessSchema), async (req, res) => {
-    res.json(await setSiteAccess(sequelize, currentUser(req), parseId(req.params.id), req.body, req.ip ?? null));
+  router.put('/users/:id/sites', ...admin, validate({ params: idParams, body: siteAccessSchema }), async (req, res) => {
+    res.json(await setSiteAccess(sequelize, currentUser(req), pathId(req), req.body, req.ip ?? null));
   });
   return router;
 }

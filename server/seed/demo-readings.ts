@@ -6,6 +6,7 @@ import { Site } from '@/server/models/site.model';
 import type { User } from '@/server/models/user.model';
 import { computedRow } from '@/server/services/readings.service';
 import { DEMO_SITES } from '@/server/seed/demo-register-data';
+import { seedDemoVisitReadings } from '@/server/seed/demo-visit-readings';
 import { barToPa, litresPerSecondToM3PerS } from '@/shared/calc';
 import type { ReadingSetInput } from '@/shared/schemas/readings';
 
@@ -76,5 +77,6 @@ export async function seedDemoReadings(opts: { organisationId: number; authors: 
     const typo = await log({ ...input, systemPressureGaugePa: barToPa(19) }, by);
     await log(input, by, { supersedesId: typo.id, correctionReason: 'Typed 19 for 1.9 bar.' });
   }
+  await seedDemoVisitReadings({ organisationId, siteId: site.id, by: authors.engineer, transaction, now });
   return true;
 }

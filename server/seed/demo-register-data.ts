@@ -46,7 +46,7 @@ const base = (plantId: string, type: AssetType, name: string, system: string, en
 });
 
 const boiler = (id: string, name: string, kw: number, o: Opt = {}) =>
-  base(id, 'boiler', name, 'LTHW primary', ['gas', 'electrical', 'hot-water'], { fuel: 'natural-gas', ratedOutputKw: kw, flowSetpointC: 80 }, o);
+  base(id, 'boiler', name, 'LTHW primary', ['gas', 'electrical', 'hot-water'], { fuel: 'natural-gas', ratedOutputKw: kw, flowSetpointC: 80, burnerPressureMbar: 9 }, o);
 const pump = (id: string, name: string, system: string, duty: string, circuit: string, o: Opt = {}) =>
   base(id, 'pump', name, system, ['electrical', 'mechanical'], { duty, circuit }, o);
 const heatingPump = (id: string, name: string, system: string, duty: string, circuit: string, o: Opt = {}) =>

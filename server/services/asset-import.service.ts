@@ -3,6 +3,7 @@ import { Op, type Sequelize, type Transaction } from 'sequelize';
 import { ValidationError } from 'yup';
 import { ATTRIBUTE_KEYS, BASE_COLUMNS, readRegisterCsv, registerExportOnlyColumns, writeRegisterCsv } from '@/server/lib/register-csv';
 import { READING_EXPORT_COLUMNS, latestReadingsForExport } from '@/server/services/readings-export';
+import type { AssetListFilters } from '@/server/services/asset-search';
 import type { AuthUser } from '@/server/middleware/auth';
 import { Asset } from '@/server/models/asset.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
@@ -18,7 +19,7 @@ registerExportOnlyColumns(READING_EXPORT_COLUMNS.map((c) => c.header));
 const TYPE_LOOKUP = new Map<string, AssetType>(ASSET_TYPES.flatMap((t) => [[key(t), t], [key(ASSET_TYPE_LABELS[t]), t]] as [string, AssetType][]));
 
 /** The register (items in service) as CSV rows; archived items are left out. */
-export async function exportRegisterCsv(actor: AuthUser, filters: { siteId: number | null; plantRoomId: number | null; type: AssetType | null }): Promise<string> {
+export async function exportRegisterCsv(actor: AuthUser, filters: Pick<AssetListFilters, 'siteId' | 'plantRoomId' | 'type'>): Promise<string> {
   const assets = await Asset.findAll({
     where: {
       organisationId: actor.organisationId,

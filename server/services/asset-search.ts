@@ -1,42 +1,8 @@
-import { HttpError } from '@/server/lib/http-error';
 import { ASSET_TYPES, ASSET_TYPE_LABELS, type AssetType } from '@/shared/rules/register';
+import type { AssetListQuery, AssetSort } from '@/shared/schemas/queries';
 
-export const ASSET_SORTS = ['plantId', '-plantId', 'name', '-name', 'type', '-type', 'nextServiceDue', '-nextServiceDue'] as const;
-export type AssetSort = (typeof ASSET_SORTS)[number];
-
-export interface AssetListFilters {
-  q: string;
-  siteId: number | null;
-  plantRoomId: number | null;
-  type: AssetType | null;
-  sort: AssetSort;
-  includeArchived: boolean;
-}
-
-const badQuery = (field: string, message: string) => new HttpError(400, 'bad-query', message, { [field]: message });
-
-function optionalId(raw: unknown, field: string): number | null {
-  if (raw === undefined || raw === '') return null;
-  const id = Number(raw);
-  if (!Number.isSafeInteger(id) || id <= 0) throw badQuery(field, `${field} must be a positive whole number.`);
-  return id;
-}
-
-/** Reads `q, siteId, plantRoomId, type, sort, includeArchived` from a query string. */
-export function readAssetListFilters(query: Record<string, unknown>): AssetListFilters {
-  const type = query.type === undefined || query.type === '' ? null : String(query.type);
-  if (type !== null && !(ASSET_TYPES as readonly string[]).includes(type)) throw badQuery('type', `Unknown type; use one of ${ASSET_TYPES.join(', ')}.`);
-  const sort = query.sort === undefined || query.sort === '' ? 'plantId' : String(query.sort);
-  if (!(ASSET_SORTS as readonly string[]).includes(sort)) throw badQuery('sort', `Sort by one of ${ASSET_SORTS.join(', ')}.`);
-  return {
-    q: typeof query.q === 'string' ? query.q.trim().slice(0, 100) : '',
-    siteId: optionalId(query.siteId, 'siteId'),
-    plantRoomId: optionalId(query.plantRoomId, 'plantRoomId'),
-    type: type as AssetType | null,
-    sort: sort as AssetSort,
-    includeArchived: query.includeArchived === 'true' || query.includeArchived === '1',
-  };
-}
+/** The item list's filters, as `assetListQuery` (shared/schemas/queries.ts) reads them. */
+export type AssetListFilters = Pick<AssetListQuery, 'q' | 'siteId' | 'plantRoomId' | 'type' | 'sort' | 'includeArchived'>;
 
 // InnoDB's default full-text stopwords (information_schema.INNODB_FT_DEFAULT_STOPWORD): a required
 // stopword (+the*) would match nothing, so they are left out of the full-text query.

@@ -1,21 +1,15 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { clock } from '@/server/lib/clock';
-import { HttpError, forbidden } from '@/server/lib/http-error';
-import type { AuthUser } from '@/server/middleware/auth';
+import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
 import { visibleSiteIds } from '@/server/services/site-access.service';
 import { overdueReviews } from '@/server/services/procedure-reviews.service';
-import { BOARD_STATES, mayViewBoard, readBoardSort, type BoardSortKey, type BoardState } from '@/shared/rules/board';
-import { DUE_SOON_HOURS, TAG_KINDS, type TagKind } from '@/shared/rules/tags';
+import { boardState, boardStateSql, type BoardSortKey } from '@/shared/rules/board';
+import type { TagKind } from '@/shared/rules/tags';
+import type { BoardQueryInput } from '@/shared/schemas/queries';
 import type { BoardResponse, BoardRow, BoardSiteCounts } from '@/shared/types/board';
 
-export interface BoardFilters {
-  siteId?: number;
-  kind?: TagKind;
-  holderId?: number;
-  state?: BoardState;
-  q?: string;
-  sort: { key: BoardSortKey; descending: boolean };
-}
+/** The board's filters and sort, as `boardQuery` (shared/schemas/queries.ts) reads them. */
+export type BoardFilters = Omit<BoardQueryInput, 'page' | 'pageSize'>;
 
 const SORT_COLUMNS: Record<BoardSortKey, string> = {
   site: 's.name',
@@ -31,34 +25,9 @@ const SORT_COLUMNS: Record<BoardSortKey, string> = {
   state: 't.expires_at',
 };
 
-const badFilter = (name: string, message: string) => new HttpError(400, 'bad-filter', message, { [name]: message });
-const optionalId = (raw: unknown, name: string) => {
-  if (raw === undefined || raw === '') return undefined;
-  const n = Number(raw);
-  if (!Number.isSafeInteger(n) || n <= 0) throw badFilter(name, `${name} must be a positive whole number.`);
-  return n;
-};
-
-/** Reads the board's filters from a query string; an unknown kind or state is a 400, an unknown sort the default. */
-export function readBoardFilters(query: Record<string, unknown>): BoardFilters {
-  const kind = query.kind === undefined || query.kind === '' ? undefined : String(query.kind);
-  if (kind !== undefined && !TAG_KINDS.includes(kind as TagKind)) throw badFilter('kind', `kind must be one of ${TAG_KINDS.join(', ')}.`);
-  const state = query.state === undefined || query.state === '' ? undefined : String(query.state);
-  if (state !== undefined && !BOARD_STATES.includes(state as BoardState)) throw badFilter('state', `state must be one of ${BOARD_STATES.join(', ')}.`);
-  const q = typeof query.q === 'string' ? query.q.trim().slice(0, 100) : '';
-  return {
-    siteId: optionalId(query.siteId, 'siteId'),
-    kind: kind as TagKind | undefined,
-    holderId: optionalId(query.holderId, 'holderId'),
-    state: state as BoardState | undefined,
-    q: q || undefined,
-    sort: readBoardSort(query.sort),
-  };
-}
-
 const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
-interface Scope { organisationId: number; siteIds: number[] | null; now: Date; soon: Date }
+interface Scope { organisationId: number; siteIds: number[] | null; now: Date }
 
 /** WHERE clause over live tags; every filter is a column of an index or of a joined primary key. */
 function whereClause(scope: Scope, f: Partial<BoardFilters>) {
@@ -71,9 +40,11 @@ function whereClause(scope: Scope, f: Partial<BoardFilters>) {
   if (f.siteId) { where.push('a.site_id = ?'); values.push(f.siteId); }
   if (f.kind) { where.push('t.kind = ?'); values.push(f.kind); }
   if (f.holderId) { where.push('t.holder_id = ?'); values.push(f.holderId); }
-  if (f.state === 'overdue') { where.push('t.expires_at < ?'); values.push(scope.now); }
-  if (f.state === 'due-soon') { where.push('t.expires_at >= ? AND t.expires_at <= ?'); values.push(scope.now, scope.soon); }
-  if (f.state === 'live') { where.push('t.expires_at > ?'); values.push(scope.soon); }
+  if (f.state) {
+    const state = boardStateSql(f.state, 't.expires_at', scope.now);
+    where.push(state.sql);
+    values.push(...state.values);
+  }
   // Every word must appear in one of plant ID, item name, reason or holder name.
   for (const word of (f.q ?? '').split(/\s+/).filter(Boolean).slice(0, 8)) {
     const like = `%${likeEscape(word)}%`;
@@ -100,7 +71,7 @@ interface RawRow {
 
 function toRow(r: RawRow, scope: Scope): BoardRow {
   const expiresAt = new Date(r.expiresAt);
-  const state: BoardState = expiresAt < scope.now ? 'overdue' : expiresAt <= scope.soon ? 'due-soon' : 'live';
+  const state = boardState(expiresAt, scope.now);
   return {
     id: r.id, siteId: r.siteId, siteName: r.siteName, timeZone: r.timeZone, plantRoomId: r.plantRoomId, plantRoomName: r.plantRoomName,
     assetId: r.assetId, plantId: r.plantId, assetName: r.assetName, kind: r.kind, reason: r.reason,
@@ -110,9 +81,8 @@ function toRow(r: RawRow, scope: Scope): BoardRow {
 }
 
 async function scopeFor(actor: AuthUser): Promise<Scope> {
-  if (!mayViewBoard(actor.role)) throw forbidden('The board is for supervisors, admins and viewers.');
-  const now = clock.now();
-  return { organisationId: actor.organisationId, siteIds: await visibleSiteIds(actor), now, soon: new Date(now.getTime() + DUE_SOON_HOURS * 3600_000) };
+  ensurePermission(actor, 'viewBoard', 'The board is for supervisors, admins and viewers.');
+  return { organisationId: actor.organisationId, siteIds: await visibleSiteIds(actor), now: clock.now() };
 }
 
 async function selectRows(sequelize: Sequelize, scope: Scope, f: BoardFilters, limit: number, offset: number): Promise<BoardRow[]> {
@@ -152,13 +122,15 @@ export async function getBoard(sequelize: Sequelize, actor: AuthUser, f: BoardFi
 /** Every live tag the caller may see, counted per site in one grouped query. */
 async function siteCounts(sequelize: Sequelize, scope: Scope): Promise<BoardSiteCounts[]> {
   const w = whereClause(scope, {});
+  const overdue = boardStateSql('overdue', 't.expires_at', scope.now);
+  const dueSoon = boardStateSql('due-soon', 't.expires_at', scope.now);
   const rows = await sequelize.query<{ siteId: number; siteName: string; total: number; overdue: number; dueSoon: number; notProved: number }>(
     `SELECT a.site_id AS siteId, s.name AS siteName, COUNT(*) AS total,
-       SUM(t.expires_at < ?) AS overdue, SUM(t.expires_at >= ? AND t.expires_at <= ?) AS dueSoon,
+       SUM(${overdue.sql}) AS overdue, SUM(${dueSoon.sql}) AS dueSoon,
        SUM(t.kind = 'isolation' AND NOT ${PROVED}) AS notProved
      FROM tags t JOIN assets a ON a.id = t.asset_id JOIN sites s ON s.id = a.site_id
      WHERE ${w.sql} GROUP BY a.site_id, s.name ORDER BY s.name, a.site_id`,
-    { replacements: [scope.now, scope.now, scope.soon, ...w.values], type: QueryTypes.SELECT },
+    { replacements: [...overdue.values, ...dueSoon.values, ...w.values], type: QueryTypes.SELECT },
   );
   return rows.map((r) => ({ siteId: r.siteId, siteName: r.siteName, total: Number(r.total), overdue: Number(r.overdue), dueSoon: Number(r.dueSoon), notProved: Number(r.notProved) }));
 }

@@ -43,6 +43,9 @@ export function expansionVesselCheck(body: ExpansionVesselRequest): ExpansionVes
     safetyValveSettingBarGauge: body.safetyValveSettingBarGauge,
     preChargeBarGauge: body.preChargeBarGauge ?? null,
     installedVesselVolumesL: body.installedVesselVolumesL,
+    mode: body.mode,
+    glycol: body.glycol ?? null,
+    measuredPressureBarGauge: body.measuredPressureBarGauge ?? null,
   };
   const settings = expansionSettingsFor(body.preChargeMarginBar);
   return { inputs, settings: describeSettings(settings), result: runExpansionCheck(inputs, settings) };

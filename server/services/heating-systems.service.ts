@@ -9,6 +9,7 @@ import { User } from '@/server/models/user.model';
 import { describeSettings, expansionSettingsFor, runExpansionCheck } from '@/server/services/calc.service';
 import { findSite } from '@/server/services/register-access';
 import { expansionInputsFor, type RegisterContext } from '@/shared/rules/readings';
+import type { GasFamily } from '@/shared/calc';
 import type { HeatingSystemInput } from '@/shared/schemas/readings';
 import type { HeatingSystem, RegisterVessel, SystemExpansionCheck } from '@/shared/types/readings';
 import type { ListResponse } from '@/shared/types/user';
@@ -23,6 +24,12 @@ const VALUE_KEYS = [
   'maxFlowTemperatureC',
   'fillTemperatureC',
   'preChargeMarginBar',
+  'glycolKind',
+  'glycolPercent',
+  'compensationOutsideLowC',
+  'compensationFlowAtLowC',
+  'compensationOutsideHighC',
+  'compensationFlowAtHighC',
 ] as const;
 
 const numberAttr = (attributes: Record<string, unknown> | null | undefined, key: string): number | null => {
@@ -30,11 +37,17 @@ const numberAttr = (attributes: Record<string, unknown> | null | undefined, key:
   return typeof v === 'number' && Number.isFinite(v) ? v : null;
 };
 
-/** A system name from the URL: trimmed, 1–120 characters (as the asset's `system` field). */
-export function parseSystemName(raw: unknown): string {
-  const name = typeof raw === 'string' ? raw.trim() : '';
-  if (!name || name.length > 120) throw new HttpError(400, 'bad-system', 'Name a system of up to 120 characters.');
-  return name;
+const lowest = (values: (number | null)[]): number | null => {
+  const known = values.filter((v): v is number => v !== null);
+  return known.length ? Math.min(...known) : null;
+};
+
+/** Natural gas or LPG from the item's recorded fuel; a gas-fired item with no fuel recorded is taken as natural gas. */
+function gasFamilyOf(asset: Asset): GasFamily | null {
+  const fuel = asset.attributes?.fuel;
+  if (fuel === 'natural-gas' || fuel === 'lpg') return fuel;
+  if (fuel) return null;
+  return asset.energySources.includes('gas') && (asset.type === 'boiler' || asset.type === 'water-heater') ? 'natural-gas' : null;
 }
 
 function toDto(siteId: number, name: string, row: HeatingSystemRow | null, assetCount: number): HeatingSystem {
@@ -96,7 +109,7 @@ export async function saveSystem(actor: AuthUser, siteId: number, name: string, 
   const site = await findSite(actor, siteId);
   const assets = await systemAssets(actor.organisationId, site.id, name);
   if (!assets.length) throw notFound('System');
-  const values = Object.fromEntries(VALUE_KEYS.map((k) => [k, input[k] ?? null])) as Pick<HeatingSystemRow, (typeof VALUE_KEYS)[number]>;
+  const values = Object.fromEntries(VALUE_KEYS.map((k) => [k, input[k] ?? null])) as unknown as Pick<HeatingSystemRow, (typeof VALUE_KEYS)[number]>;
   const existing = await findRow(actor.organisationId, site.id, name);
   if (existing) await existing.update({ ...values, updatedBy: actor.id });
   else {
@@ -115,7 +128,8 @@ export async function saveSystem(actor: AuthUser, siteId: number, name: string, 
 export async function registerContextFor(asset: Asset, transaction?: Transaction): Promise<RegisterContext> {
   const systemName = asset.system.trim() || null;
   const setpoint = asset.type === 'boiler' ? numberAttr(asset.attributes, 'flowSetpointC') : null;
-  if (!systemName) return { siteId: asset.siteId, systemName, system: null, pressurisationUnits: [], assetFlowSetpointC: setpoint };
+  const gas = { gasFamily: gasFamilyOf(asset), burnerPressureSettingMbar: numberAttr(asset.attributes, 'burnerPressureMbar') };
+  if (!systemName) return { siteId: asset.siteId, systemName, system: null, pressurisationUnits: [], assetFlowSetpointC: setpoint, ...gas };
   const [row, assets] = await Promise.all([
     findRow(asset.organisationId, asset.siteId, systemName, transaction),
     systemAssets(asset.organisationId, asset.siteId, systemName, transaction),
@@ -128,6 +142,8 @@ export async function registerContextFor(asset: Asset, transaction?: Transaction
       .filter((a) => a.type === 'pressurisation-unit')
       .map((a) => ({ plantId: a.plantId, fillPressureBar: numberAttr(a.attributes, 'fillPressureBar') })),
     assetFlowSetpointC: setpoint,
+    vesselPreChargeBar: lowest(assets.filter((a) => a.type === 'vessel').map((a) => numberAttr(a.attributes, 'preChargeBar'))),
+    ...gas,
   };
 }
 

@@ -1,15 +1,16 @@
 import { Op, type Sequelize, type WhereOptions } from 'sequelize';
 import { clock } from '@/server/lib/clock';
-import { HttpError, forbidden, notFound } from '@/server/lib/http-error';
+import { HttpError, notFound } from '@/server/lib/http-error';
 import { assertCanEdit } from '@/server/services/register-access';
-import { renderLabelsPdf, type LabelLayout } from '@/server/lib/label-pdf';
+import { renderLabelsPdf } from '@/server/lib/label-pdf';
 import { insertWithLabelCode } from '@/server/lib/unique-clash';
-import type { AuthUser } from '@/server/middleware/auth';
+import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
 import { Asset } from '@/server/models/asset.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { RetiredLabel } from '@/server/models/retired-label.model';
 import { Site } from '@/server/models/site.model';
 import { labelUrl, normaliseLabelCode } from '@/shared/rules/label-code';
+import type { LabelLayout } from '@/shared/schemas/queries';
 
 export const MAX_LABELS_PER_PDF = 500;
 
@@ -26,7 +27,7 @@ export async function assetIdForLabel(actor: AuthUser, raw: string): Promise<num
  * refuses it twice) and stops opening the item. A clash with a live code is retried by the register's own mechanism.
  */
 export async function replaceLabel(sequelize: Sequelize, actor: AuthUser, assetId: number): Promise<{ labelCode: string; retiredCode: string }> {
-  if (actor.role === 'viewer') throw forbidden('Viewers cannot replace labels.');
+  ensurePermission(actor, 'replaceLabel', 'Viewers cannot replace labels.');
   return sequelize.transaction(async (transaction) => {
     const asset = Number.isSafeInteger(assetId)
       ? await Asset.findOne({ where: { id: assetId, organisationId: actor.organisationId }, transaction, lock: transaction.LOCK.UPDATE })

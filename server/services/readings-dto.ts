@@ -1,19 +1,11 @@
 import type { Reading } from '@/server/models/reading.model';
+import { pickReadingValues } from '@/shared/rules/reading-keys';
 import type { ReadingSet, ReadingValues } from '@/shared/types/readings';
 
 // Shapes of shared/types/readings.ts: column names never reach the client.
 
 export function readingValues(r: Reading): ReadingValues {
-  return {
-    flowTemperatureC: r.flowTemperatureC,
-    returnTemperatureC: r.returnTemperatureC,
-    flowSetpointC: r.flowSetpointC,
-    flowRateM3PerS: r.flowRateM3PerS,
-    systemPressureGaugePa: r.systemPressureGaugePa,
-    pumpInletPressureGaugePa: r.pumpInletPressureGaugePa,
-    pumpOutletPressureGaugePa: r.pumpOutletPressureGaugePa,
-    surfaceTemperatures: r.surfaceTemperatures ?? [],
-  };
+  return { ...pickReadingValues(r), surfaceTemperatures: r.surfaceTemperatures ?? [] };
 }
 
 /** Expects `creator` and `correction` (with its `creator`) to be loaded. */

@@ -9,6 +9,7 @@ import { Reading } from '@/server/models/reading.model';
 import { User } from '@/server/models/user.model';
 import { registerContextFor } from '@/server/services/heating-systems.service';
 import { toReadingSet } from '@/server/services/readings-dto';
+import { pickReadingValues } from '@/shared/rules/reading-keys';
 import { resolveCheckSettings, runReadingChecks } from '@/shared/rules/readings';
 import type { ReadingCorrectionInput, ReadingSetInput } from '@/shared/schemas/readings';
 import type { ReadingList, ReadingSet, ReadingValues } from '@/shared/types/readings';
@@ -31,13 +32,7 @@ async function findAsset(actor: AuthUser, id: number): Promise<Asset> {
 }
 
 const values = (input: ReadingSetInput): ReadingValues => ({
-  flowTemperatureC: input.flowTemperatureC ?? null,
-  returnTemperatureC: input.returnTemperatureC ?? null,
-  flowSetpointC: input.flowSetpointC ?? null,
-  flowRateM3PerS: input.flowRateM3PerS ?? null,
-  systemPressureGaugePa: input.systemPressureGaugePa ?? null,
-  pumpInletPressureGaugePa: input.pumpInletPressureGaugePa ?? null,
-  pumpOutletPressureGaugePa: input.pumpOutletPressureGaugePa ?? null,
+  ...pickReadingValues(input),
   surfaceTemperatures: (input.surfaceTemperatures ?? []).map((s) => ({ location: s.location, temperatureC: s.temperatureC })),
 });
 
@@ -76,18 +71,33 @@ export async function listReadings(actor: AuthUser, assetId: number, paging: Pag
   return { items: rows.map(toReadingSet), total: count, page: paging.page, pageSize: paging.pageSize, checkSettings };
 }
 
-export async function logReadings(actor: AuthUser, assetId: number, input: ReadingSetInput): Promise<ReadingSet> {
+/**
+ * Logs a set. With an Idempotency-Key, a repeat from the same person (an outbox sending again after a lost answer)
+ * returns the set already stored instead of storing a second one.
+ */
+export async function logReadings(actor: AuthUser, assetId: number, input: ReadingSetInput, idempotencyKey: string | null = null): Promise<ReadingSet> {
   const asset = await findAsset(actor, assetId);
+  const earlier = async () => (idempotencyKey ? Reading.findOne({ where: { createdBy: actor.id, idempotencyKey, assetId: asset.id } }) : null);
+  const existing = await earlier();
+  if (existing) return loadSet(existing.id);
   if (asset.archivedAt) throw conflict('This item is archived; readings can no longer be logged on it.');
-  const row = await Reading.create({
-    assetId: asset.id,
-    takenAt: input.takenAt ?? clock.now(),
-    ...(await computedRow(asset, input)),
-    supersedesId: null,
-    correctionReason: null,
-    createdBy: actor.id,
-  });
-  return loadSet(row.id);
+  try {
+    const row = await Reading.create({
+      assetId: asset.id,
+      takenAt: input.takenAt ?? clock.now(),
+      ...(await computedRow(asset, input)),
+      supersedesId: null,
+      correctionReason: null,
+      createdBy: actor.id,
+      idempotencyKey,
+    });
+    return loadSet(row.id);
+  } catch (err) {
+    // Two copies of the same request at once: the unique index lets one in; the other answers with it.
+    const first = err instanceof UniqueConstraintError ? await earlier() : null;
+    if (first) return loadSet(first.id);
+    throw err;
+  }
 }
 
 /** Appends a correction by the original's author; the original is kept and marked superseded. */

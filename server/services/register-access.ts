@@ -3,20 +3,11 @@ import { HttpError, forbidden, notFound } from '@/server/lib/http-error';
 import type { AuthUser } from '@/server/middleware/auth';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { Site } from '@/server/models/site.model';
-import { parseId as parseIdOrNull } from '@/shared/rules/ids';
-import { isSupervisory } from '@/shared/rules/roles';
+import { RECORD_PERMISSIONS } from '@/shared/rules/permissions';
 
-/** An id from a path or query, or 400 (the rule is shared/rules/ids.ts). */
-export function parseId(raw: unknown): number {
-  const id = parseIdOrNull(raw);
-  if (id === null) throw new HttpError(400, 'bad-id', 'The id must be a positive whole number.');
-  return id;
-}
-
-/** Supervisors and admins edit anything; engineers edit what they added; viewers nothing. */
+/** Supervisors and admins edit anything; engineers edit what they added; viewers nothing (RECORD_PERMISSIONS.editRecord). */
 export function assertCanEdit(actor: AuthUser, createdBy: number, what: string) {
-  if (isSupervisory(actor.role)) return;
-  if (actor.role === 'engineer' && createdBy === actor.id) return;
+  if (RECORD_PERMISSIONS.editRecord(actor, { createdBy })) return;
   throw forbidden(`Engineers can change only the ${what}s they added. Ask a supervisor to change this one.`);
 }
 

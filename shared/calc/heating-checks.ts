@@ -2,7 +2,10 @@
 // readings and system settings it needs are present; missing inputs omit it.
 import { DEFAULT_HEATING_CHECK_BANDS, type HeatingCheckBands } from '@/shared/calc/check-bands';
 import { isReading, type CheckResult } from '@/shared/calc/check-result';
-import { pumpHeadCheck, systemPressureCheck } from '@/shared/calc/pressure-checks';
+import type { CompensationSettings } from '@/shared/calc/compensation';
+import { GLYCOL_LABELS, GLYCOL_SOURCE, glycolDensityKgPerM3, glycolSpecificHeatJPerKgK, type GlycolKind, type GlycolMix } from '@/shared/calc/glycol';
+import { pumpHeadCheck } from '@/shared/calc/pressure-checks';
+import { systemPressureCheck } from '@/shared/calc/sealed-system';
 import { m3PerSToLitresPerSecond, gaugeToAbsolutePa } from '@/shared/calc/units';
 import { defaultLiquidPressureAbsPa, liquidWaterProperties, LIQUID_WATER_RANGE_C } from '@/shared/calc/water';
 
@@ -14,6 +17,8 @@ export interface HeatingReadings {
   systemPressureGaugePa?: number | null;
   pumpInletPressureGaugePa?: number | null;
   pumpOutletPressureGaugePa?: number | null;
+  /** Height of the system gauge above the vessel or reference point; the pressure is corrected to that level. */
+  gaugeHeightM?: number | null;
 }
 
 /** Design values kept per heating system. */
@@ -24,7 +29,20 @@ export interface HeatingSystemSettings {
   /** Cold fill pressure set at the pressurisation unit. */
   fillPressureGaugePa?: number | null;
   safetyValveSettingGaugePa?: number | null;
+  /** Lowest pre-charge recorded on the system's expansion vessels. */
+  vesselPreChargeGaugePa?: number | null;
+  glycolKind?: GlycolKind | null;
+  /** Glycol by mass, %. */
+  glycolPercent?: number | null;
 }
+
+/** Everything a reading set is checked against: design values plus the weather-compensation curve. */
+export type CheckSettingsValues = HeatingSystemSettings & CompensationSettings;
+
+export const glycolMixOf = (s: HeatingSystemSettings): GlycolMix | null =>
+  s.glycolKind && isReading(s.glycolPercent) && s.glycolPercent > 0 ? { kind: s.glycolKind, percent: s.glycolPercent } : null;
+
+const BANDS_SOURCE = 'Common practice, no published source (a site setting).';
 
 function assertTemperature(label: string, value: number | null | undefined): void {
   if (value === null || value === undefined) return;
@@ -69,6 +87,8 @@ export function deltaTCheck(
   if (!isReading(designDeltaTK)) return result;
   result.inputs.push({ label: 'Design ΔT', value: designDeltaTK, unit: 'K' });
   result.formula = 'ΔT = T_flow − T_return, compared with design ΔT';
+  result.limit = `design ΔT ± ${Math.round(bands.deltaTToleranceFraction * 100)} %`;
+  result.source = BANDS_SOURCE;
   const deviation = (deltaT - designDeltaTK) / designDeltaTK;
   const percent = Math.round(Math.abs(deviation) * 100);
   if (deviation > bands.deltaTToleranceFraction) {
@@ -91,13 +111,17 @@ export function heatDeliveredCheck(
   returnC: number,
   flowRateM3PerS: number,
   systemPressureGaugePa?: number | null,
+  glycol?: GlycolMix | null,
 ): CheckResult {
   const meanC = (flowC + returnC) / 2;
   const liquidPa = defaultLiquidPressureAbsPa(meanC);
   const pressureAbsPa = isReading(systemPressureGaugePa)
     ? Math.max(gaugeToAbsolutePa(systemPressureGaugePa), liquidPa)
     : liquidPa;
-  const water = liquidWaterProperties(meanC, pressureAbsPa);
+  const water = glycol
+    ? { densityKgPerM3: glycolDensityKgPerM3(glycol, meanC), specificHeatJPerKgK: glycolSpecificHeatJPerKgK(glycol, meanC) }
+    : liquidWaterProperties(meanC, pressureAbsPa);
+  const fluid = glycol ? `${GLYCOL_LABELS[glycol.kind]} ${glycol.percent} %` : 'IAPWS-IF97';
   const deltaT = flowC - returnC;
   const massFlowKgPerS = flowRateM3PerS * water.densityKgPerM3;
   const heatW = massFlowKgPerS * water.specificHeatJPerKgK * deltaT;
@@ -108,12 +132,13 @@ export function heatDeliveredCheck(
     inputs: [
       { label: 'Flow rate', value: m3PerSToLitresPerSecond(flowRateM3PerS), unit: 'L/s' },
       { label: 'Mean water temperature', value: meanC, unit: '°C' },
-      { label: 'Density ρ (IAPWS-IF97)', value: water.densityKgPerM3, unit: 'kg/m³' },
-      { label: 'Specific heat c_p (IAPWS-IF97)', value: water.specificHeatJPerKgK / 1000, unit: 'kJ/(kg·K)' },
+      { label: `Density ρ (${fluid})`, value: water.densityKgPerM3, unit: 'kg/m³' },
+      { label: `Specific heat c_p (${fluid})`, value: water.specificHeatJPerKgK / 1000, unit: 'kJ/(kg·K)' },
       { label: 'ΔT', value: deltaT, unit: 'K' },
     ],
     value: heatW / 1000,
     unit: 'kW',
+    source: glycol ? GLYCOL_SOURCE : 'Water properties from IAPWS-IF97 region 1',
   };
   if (deltaT <= 0) {
     result.flag = { level: 'info', message: 'No heat is being delivered at this ΔT.' };
@@ -125,6 +150,7 @@ export function flowSetpointCheck(
   flowC: number,
   setpointC: number,
   bands: HeatingCheckBands = DEFAULT_HEATING_CHECK_BANDS,
+  setpointSource?: string,
 ): CheckResult {
   const deviationK = flowC - setpointC;
   const result: CheckResult = {
@@ -137,6 +163,8 @@ export function flowSetpointCheck(
     ],
     value: deviationK,
     unit: 'K',
+    limit: `within ±${bands.setpointDeadbandK} K; caution beyond +${bands.setpointOvershootCautionK} K or −${bands.setpointShortfallCautionK} K`,
+    source: setpointSource ? `Setpoint: ${setpointSource}. Bands: ${BANDS_SOURCE}` : BANDS_SOURCE,
   };
   const shortfall = -deviationK;
   if (deviationK > bands.setpointOvershootCautionK) {
@@ -166,6 +194,7 @@ export function computeHeatingChecks(
   readings: HeatingReadings,
   system: HeatingSystemSettings = {},
   bands: HeatingCheckBands = DEFAULT_HEATING_CHECK_BANDS,
+  setpointSource?: string,
 ): CheckResult[] {
   assertTemperature('Flow temperature', readings.flowTemperatureC);
   assertTemperature('Return temperature', readings.returnTemperatureC);
@@ -179,7 +208,7 @@ export function computeHeatingChecks(
   if (haveTemperatures) {
     results.push(deltaTCheck(flowC, returnC, system.designDeltaTK, bands));
     if (isReading(flowRateM3PerS)) {
-      results.push(heatDeliveredCheck(flowC, returnC, flowRateM3PerS, readings.systemPressureGaugePa));
+      results.push(heatDeliveredCheck(flowC, returnC, flowRateM3PerS, readings.systemPressureGaugePa, glycolMixOf(system)));
     }
   }
   const pumpHead = pumpHeadCheck(
@@ -189,14 +218,9 @@ export function computeHeatingChecks(
   );
   if (pumpHead) results.push(pumpHead);
   if (isReading(flowC) && isReading(system.flowSetpointC)) {
-    results.push(flowSetpointCheck(flowC, system.flowSetpointC, bands));
+    results.push(flowSetpointCheck(flowC, system.flowSetpointC, bands, setpointSource));
   }
-  const pressure = systemPressureCheck(
-    readings.systemPressureGaugePa,
-    system.fillPressureGaugePa,
-    system.safetyValveSettingGaugePa,
-    bands,
-  );
+  const pressure = systemPressureCheck(readings, system, bands);
   if (pressure) results.push(pressure);
   return results;
 }

@@ -1,5 +1,7 @@
 // Validation shared by forms and the API, so both sides accept and refuse the same values.
-import { array, number, object, type InferType } from 'yup';
+import { array, mixed, number, object, type InferType } from 'yup';
+
+import { GLYCOL_KINDS, GLYCOL_RANGE, type GlycolKind } from '@/shared/calc/glycol';
 
 import { LIQUID_WATER_RANGE_C } from '@/shared/calc/water';
 import { STANDARD_ATMOSPHERE_PA } from '@/shared/calc/units';
@@ -78,5 +80,18 @@ export const expansionVesselInputsSchema = object({
   )
     .required()
     .default([]),
+  mode: mixed<'check' | 'size'>().oneOf(['check', 'size'], 'Choose check or size only.').default('check'),
+  glycol: object({
+    kind: mixed<GlycolKind>().oneOf([...GLYCOL_KINDS], 'Choose propylene or ethylene glycol.').required('Choose the glycol.'),
+    percent: number()
+      .label('Glycol concentration')
+      .required('Give the concentration.')
+      .min(0, 'At least 0 %')
+      .max(GLYCOL_RANGE.maxPercent, `At most ${GLYCOL_RANGE.maxPercent} % by mass`),
+  })
+    .nullable()
+    .optional()
+    .default(null),
+  measuredPressureBarGauge: number().label('Measured pressure').min(0, 'Measured pressure cannot be negative').max(100).nullable().optional(),
 });
 export type ExpansionVesselInputsInput = InferType<typeof expansionVesselInputsSchema>;

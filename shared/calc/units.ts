@@ -16,6 +16,10 @@ export const barToPa = (bar: number): number => bar * PA_PER_BAR;
 export const paToBar = (pa: number): number => pa / PA_PER_BAR;
 export const kPaToPa = (kPa: number): number => kPa * 1000;
 export const paToKPa = (pa: number): number => pa / 1000;
+// 1 mbar = 100 Pa exactly (ISO 80000-4 via 1 bar = 10^5 Pa); gas pressures are read in mbar.
+export const PA_PER_MBAR = 100;
+export const mbarToPa = (mbar: number): number => mbar * PA_PER_MBAR;
+export const paToMbar = (pa: number): number => pa / PA_PER_MBAR;
 
 export const gaugeToAbsolutePa = (gaugePa: number): number => gaugePa + STANDARD_ATMOSPHERE_PA;
 export const absoluteToGaugePa = (absPa: number): number => absPa - STANDARD_ATMOSPHERE_PA;
@@ -68,6 +72,12 @@ export const UNIT_OPTIONS = {
   pressure: [
     { key: 'bar', label: 'bar', toSi: barToPa, fromSi: paToBar },
     { key: 'kPa', label: 'kPa', toSi: kPaToPa, fromSi: paToKPa },
+    { key: 'mbar', label: 'mbar', toSi: mbarToPa, fromSi: paToMbar },
+  ],
+  gasPressure: [
+    { key: 'mbar', label: 'mbar', toSi: mbarToPa, fromSi: paToMbar },
+    { key: 'kPa', label: 'kPa', toSi: kPaToPa, fromSi: paToKPa },
+    { key: 'bar', label: 'bar', toSi: barToPa, fromSi: paToBar },
   ],
   flow: [
     { key: 'L/s', label: 'L/s', toSi: litresPerSecondToM3PerS, fromSi: m3PerSToLitresPerSecond },
@@ -76,6 +86,11 @@ export const UNIT_OPTIONS = {
   ],
   temperature: [{ key: 'C', label: '°C', toSi: identity, fromSi: identity }],
   length: [{ key: 'm', label: 'm', toSi: identity, fromSi: identity }],
+  percent: [{ key: '%', label: '%', toSi: identity, fromSi: identity }],
+  ppm: [{ key: 'ppm', label: 'ppm', toSi: identity, fromSi: identity }],
+  ph: [{ key: 'pH', label: 'pH', toSi: identity, fromSi: identity }],
+  conductivity: [{ key: 'uS/cm', label: 'µS/cm', toSi: identity, fromSi: identity }],
+  time: [{ key: 's', label: 's', toSi: identity, fromSi: identity }],
   volume: [
     { key: 'L', label: 'L', toSi: litresToM3, fromSi: m3ToLitres },
     { key: 'm3', label: 'm³', toSi: identity, fromSi: identity },
@@ -89,6 +104,13 @@ export const SI_UNIT_LABEL = {
   temperature: '°C',
   length: 'm',
   volume: 'm³',
+  gasPressure: 'Pa',
+  // Percentages, ppm, pH and conductivity are kept as the trade reads them (µS/cm, not S/m).
+  percent: '%',
+  ppm: 'ppm',
+  ph: 'pH',
+  conductivity: 'µS/cm',
+  time: 's',
 } as const satisfies Record<keyof typeof UNIT_OPTIONS, string>;
 
 export type PhysicalQuantity = keyof typeof UNIT_OPTIONS;

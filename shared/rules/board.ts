@@ -1,4 +1,4 @@
-import type { Role } from '@/shared/rules/roles';
+import { DUE_SOON_HOURS, isDueSoon, isOverdue } from '@/shared/rules/tags';
 
 /**
  * A live tag's state on the board, from its expiry and the server's clock: overdue once past its expiry,
@@ -6,6 +6,27 @@ import type { Role } from '@/shared/rules/roles';
  */
 export const BOARD_STATES = ['overdue', 'due-soon', 'live'] as const;
 export type BoardState = (typeof BOARD_STATES)[number];
+
+/** The one state rule, from the tag rules' overdue and due-soon checks. */
+export function boardState(expiresAt: Date | string, now: Date): BoardState {
+  const tag = { status: 'live' as const, expiresAt };
+  return isOverdue(tag, now) ? 'overdue' : isDueSoon(tag, now) ? 'due-soon' : 'live';
+}
+
+/** When "due soon" ends: DUE_SOON_HOURS after now. */
+export const dueSoonUntil = (now: Date) => new Date(now.getTime() + DUE_SOON_HOURS * 3600_000);
+
+/**
+ * The same rule as an SQL condition on an expiry column, with its `?` values, so the database filters and
+ * counts exactly what `boardState` says (overdue: before now; due soon: now up to and including the end of
+ * the window; live: after it).
+ */
+export function boardStateSql(state: BoardState, column: string, now: Date): { sql: string; values: Date[] } {
+  const soon = dueSoonUntil(now);
+  if (state === 'overdue') return { sql: `${column} < ?`, values: [now] };
+  if (state === 'due-soon') return { sql: `(${column} >= ? AND ${column} <= ?)`, values: [now, soon] };
+  return { sql: `${column} > ?`, values: [soon] };
+}
 
 export const BOARD_STATE_LABELS: Record<BoardState, string> = {
   overdue: 'Overdue',
@@ -24,9 +45,6 @@ export const BOARD_CSV_MAX_ROWS = 5000;
 
 /** Seconds between refreshes of an open board. */
 export const BOARD_REFRESH_SECONDS = 30;
-
-/** Supervisors and admins see every site; viewers only the sites given to them; engineers have no board. */
-export const mayViewBoard = (role: Role) => role !== 'engineer';
 
 /** Reads `sort` (`key` or `-key`) from a query string; anything unknown falls back to the default. */
 export function readBoardSort(raw: unknown): { key: BoardSortKey; descending: boolean } {

@@ -1,3 +1,4 @@
+import { may } from '@/shared/rules/permissions';
 import type { Role } from '@/shared/rules/roles';
 
 /**
@@ -17,8 +18,8 @@ export const NOTIFICATION_LABELS: Record<NotificationKey, string> = {
 
 /** Which of the e-mails a role can receive at all; the others are never sent to it. */
 export function notificationsForRole(role: Role): NotificationKey[] {
-  if (role === 'admin' || role === 'supervisor') return [...NOTIFICATION_KEYS];
-  if (role === 'engineer') return ['myTags'];
+  if (may({ role }, 'receiveOrganisationMail')) return [...NOTIFICATION_KEYS];
+  if (may({ role }, 'receiveOwnTagMail')) return ['myTags'];
   return [];
 }
 

@@ -68,6 +68,9 @@ export function may(actor: Pick<Actor, 'role'> | null | undefined, permission: R
   return !!actor && (ROLE_PERMISSIONS[permission] as readonly Role[]).includes(actor.role);
 }
 
+/** The roles holding a permission, for a query that selects people by it (who gets which e-mail). */
+export const rolesWith = (permission: RolePermission): Role[] => [...ROLE_PERMISSIONS[permission]];
+
 /** Everything a role may do, for a role's description and for tests. */
 export const permissionsOf = (role: Role): RolePermission[] => ROLE_PERMISSION_NAMES.filter((p) => may({ role }, p));
 

@@ -3,13 +3,18 @@
 // is stored and by the form for live checks while typing, so both give the same answer.
 import {
   barToPa,
-  computeHeatingChecks,
+  compensatedSetpointC,
+  compensationCurve,
+  computeReadingChecks,
+  describeCurve,
+  glycolMixOf,
   isReading,
   m3ToLitres,
   paToBar,
   type CheckResult,
+  type CheckSettingsValues,
   type ExpansionVesselInputs,
-  type HeatingSystemSettings,
+  type GasFamily,
 } from '@/shared/calc';
 import type {
   CheckSettings,
@@ -20,27 +25,7 @@ import type {
   SystemExpansionCheck,
 } from '@/shared/types/readings';
 
-export const READING_VALUE_KEYS = [
-  'flowTemperatureC',
-  'returnTemperatureC',
-  'flowSetpointC',
-  'flowRateM3PerS',
-  'systemPressureGaugePa',
-  'pumpInletPressureGaugePa',
-  'pumpOutletPressureGaugePa',
-] as const satisfies readonly (keyof ReadingValues)[];
-export type ReadingValueKey = (typeof READING_VALUE_KEYS)[number];
-
-export const emptyReadingValues = (): ReadingValues => ({
-  flowTemperatureC: null,
-  returnTemperatureC: null,
-  flowSetpointC: null,
-  flowRateM3PerS: null,
-  systemPressureGaugePa: null,
-  pumpInletPressureGaugePa: null,
-  pumpOutletPressureGaugePa: null,
-  surfaceTemperatures: [],
-});
+export { emptyReadingValues, READING_VALUE_KEYS, type ReadingValueKey } from '@/shared/rules/reading-keys';
 
 /** Register facts that feed the checks of one item. */
 export interface RegisterContext {
@@ -51,17 +36,35 @@ export interface RegisterContext {
   pressurisationUnits: { plantId: string; fillPressureBar: number | null }[];
   /** The item's own flow setpoint (boilers record one in the register). */
   assetFlowSetpointC: number | null;
+  /** Lowest pre-charge of the expansion vessels on the same system, bar. */
+  vesselPreChargeBar?: number | null;
+  /** Gas family when the item burns gas (from its fuel in the register); null otherwise. */
+  gasFamily?: GasFamily | null;
+  burnerPressureSettingMbar?: number | null;
 }
+
+const SYSTEM_KEYS = [
+  'designDeltaTK',
+  'safetyValveSettingGaugePa',
+  'glycolKind',
+  'glycolPercent',
+  'compensationOutsideLowC',
+  'compensationFlowAtLowC',
+  'compensationOutsideHighC',
+  'compensationFlowAtHighC',
+] as const satisfies readonly (keyof CheckSettingsValues & keyof HeatingSystem)[];
 
 /** The design values a new set on an item is checked against, each with where it came from. */
 export function resolveCheckSettings(ctx: RegisterContext): CheckSettings {
-  const settings: HeatingSystemSettings = {};
+  const settings: CheckSettingsValues = {};
   const sources: CheckSettings['sources'] = {};
   const s = ctx.system;
   const label = ctx.systemName ? `System settings (${ctx.systemName})` : 'System settings';
-  if (s && isReading(s.designDeltaTK)) {
-    settings.designDeltaTK = s.designDeltaTK;
-    sources.designDeltaTK = label;
+  for (const key of SYSTEM_KEYS) {
+    const v = s?.[key];
+    if (v === null || v === undefined) continue;
+    (settings as Record<string, unknown>)[key] = v;
+    sources[key] = label;
   }
   if (isReading(ctx.assetFlowSetpointC)) {
     settings.flowSetpointC = ctx.assetFlowSetpointC;
@@ -70,9 +73,9 @@ export function resolveCheckSettings(ctx: RegisterContext): CheckSettings {
     settings.flowSetpointC = s.flowSetpointC;
     sources.flowSetpointC = label;
   }
-  if (s && isReading(s.safetyValveSettingGaugePa)) {
-    settings.safetyValveSettingGaugePa = s.safetyValveSettingGaugePa;
-    sources.safetyValveSettingGaugePa = label;
+  if (isReading(ctx.vesselPreChargeBar)) {
+    settings.vesselPreChargeGaugePa = barToPa(ctx.vesselPreChargeBar);
+    sources.vesselPreChargeGaugePa = 'Lowest vessel pre-charge on this system in the register';
   }
   const unit = ctx.pressurisationUnits.find((u) => isReading(u.fillPressureBar));
   if (s && isReading(s.fillPressureGaugePa)) {
@@ -82,20 +85,34 @@ export function resolveCheckSettings(ctx: RegisterContext): CheckSettings {
     settings.fillPressureGaugePa = barToPa(unit.fillPressureBar);
     sources.fillPressureGaugePa = `Pressurisation unit ${unit.plantId} in the register`;
   }
-  return { siteId: ctx.siteId, systemName: ctx.systemName, settings, sources };
+  const appliance = { family: ctx.gasFamily ?? null, burnerPressureSettingMbar: ctx.burnerPressureSettingMbar ?? null };
+  return { siteId: ctx.siteId, systemName: ctx.systemName, settings, sources, appliance };
 }
 
-/** Runs the heating checks on one set; a setpoint written on the set wins over the stored one. */
+/**
+ * Runs every check on one set. The setpoint: one written on the set wins; on a weather-compensated
+ * system the curve at the outside temperature read; a compensated system with no outside reading
+ * gets no setpoint check, so a mild day is never flagged against the cold-day setpoint.
+ */
 export function runReadingChecks(
   values: ReadingValues,
   base: CheckSettings,
 ): { results: CheckResult[]; flags: ReadingFlag[]; settingsUsed: CheckSettings } {
-  const settingsUsed: CheckSettings = { ...base, settings: { ...base.settings }, sources: { ...base.sources } };
+  const settingsUsed: CheckSettings = { ...base, settings: { ...base.settings }, sources: { ...base.sources }, appliance: base.appliance ?? { family: null } };
+  const curve = compensationCurve(base.settings);
   if (isReading(values.flowSetpointC)) {
     settingsUsed.settings.flowSetpointC = values.flowSetpointC;
     settingsUsed.sources.flowSetpointC = 'This reading';
+  } else if (curve && isReading(values.outsideTemperatureC)) {
+    settingsUsed.settings.flowSetpointC = compensatedSetpointC(curve, values.outsideTemperatureC);
+    settingsUsed.sources.flowSetpointC = describeCurve(curve, values.outsideTemperatureC);
+  } else if (curve) {
+    delete settingsUsed.settings.flowSetpointC;
+    settingsUsed.sources.flowSetpointC = 'Weather-compensated: enter the outside temperature to check the setpoint';
   }
-  const results = computeHeatingChecks(values, settingsUsed.settings);
+  const results = computeReadingChecks(values, settingsUsed.settings, settingsUsed.appliance, {
+    setpointSource: settingsUsed.sources.flowSetpointC,
+  });
   const flags: ReadingFlag[] = results.flatMap((r) => (r.flag ? [{ key: r.key, level: r.flag.level, message: r.flag.message }] : []));
   return { results, flags, settingsUsed };
 }
@@ -124,9 +141,11 @@ export function expansionInputsFor(
   // With several vessels the lowest recorded pre-charge is the one that lets air in first.
   const preCharges = vessels.map((v) => v.preChargeBar).filter(isReading);
   if (preCharges.length) inputs.preChargeBarGauge = Math.min(...preCharges);
+  inputs.glycol = glycolMixOf(system);
   const complete =
     missing.length === 0
       ? {
+          glycol: inputs.glycol,
           systemVolumeL: inputs.systemVolumeL!,
           fillTemperatureC: inputs.fillTemperatureC!,
           maxFlowTemperatureC: inputs.maxFlowTemperatureC!,

@@ -8,7 +8,4 @@ export const ROLE_LABELS: Record<Role, string> = {
   viewer: 'Viewer (read only)',
 };
 
-/** Roles that may change the register and raise tags. */
-export const canEdit = (role: Role) => role !== 'viewer';
-/** Roles that oversee every site: the board, clearance in absence, archiving. */
-export const isSupervisory = (role: Role) => role === 'admin' || role === 'supervisor';
+// What each role may do is in shared/rules/permissions.ts, and only there.

@@ -63,6 +63,7 @@ export const attributeSchemas: Record<AssetType, yup.AnyObjectSchema> = {
     fuel: yup.string().oneOf(['natural-gas', 'lpg', 'oil', 'electric', 'biomass', 'other', '']).default(''),
     ratedOutputKw: optionalNumber(0, 100000, 'kW'),
     flowSetpointC: optionalNumber(0, 120, '°C'),
+    burnerPressureMbar: optionalNumber(0, 500, 'mbar'),
   }),
   pump: yup.object({
     duty: yup.string().oneOf(['duty', 'standby', 'duty-assist', 'single', '']).default(''),
@@ -87,6 +88,7 @@ export const attributeSchemas: Record<AssetType, yup.AnyObjectSchema> = {
     fillPressureBar: optionalNumber(0, 25, 'bar'),
   }),
   'water-heater': yup.object({
+    fuel: yup.string().oneOf(['natural-gas', 'lpg', 'oil', 'electric', 'other', '']).default(''),
     capacityL: optionalNumber(0, 100000, 'L'),
     setpointC: optionalNumber(0, 100, '°C'),
   }),

@@ -27,7 +27,7 @@ export type ErrorCode =
   // 429, 5xx
   | 'rate-limited' | 'server-error' | 'unavailable' | 'busy'
   // made up by the client when there is no answer to read
-  | 'offline' | 'http-error' | 'bad-url';
+  | 'offline' | 'queued' | 'http-error' | 'bad-url';
 
 /** Field messages keyed by the field's path, as yup names it (`reason`, `points[0].method`, `attributes.capacityL`). */
 export type FieldErrors = Record<string, string>;

@@ -1,11 +1,15 @@
 import type {
   CheckFlagLevel,
+  CheckKey,
   CheckResult,
+  CheckSettingsValues,
   ExpansionVesselInputs,
   ExpansionVesselResult,
-  HeatingCheckKey,
-  HeatingSystemSettings,
+  GasAppliance,
+  GlycolKind,
+  InhibitorResult,
   SettingChoice,
+  WaterAppearance,
 } from '@/shared/calc';
 import type { ListResponse } from '@/shared/types/user';
 
@@ -23,11 +27,34 @@ export interface ReadingValues {
   systemPressureGaugePa: number | null;
   pumpInletPressureGaugePa: number | null;
   pumpOutletPressureGaugePa: number | null;
+  /** Height of the gauge above the vessel or reference point, m (negative below it). */
+  gaugeHeightM: number | null;
+  outsideTemperatureC: number | null;
+  /** Gas pressures, Pa gauge (entered in mbar). */
+  gasStandingPressurePa: number | null;
+  gasWorkingPressurePa: number | null;
+  burnerPressurePa: number | null;
+  flueO2Percent: number | null;
+  flueCo2Percent: number | null;
+  flueCoPpm: number | null;
+  flueTemperatureC: number | null;
+  /** As the analyser gives it. */
+  combustionEfficiencyPercent: number | null;
+  storeTemperatureC: number | null;
+  hotWaterReturnTemperatureC: number | null;
+  outletTemperatureC: number | null;
+  outletRunSeconds: number | null;
+  inhibitorResult: InhibitorResult | null;
+  waterPh: number | null;
+  conductivityUSPerCm: number | null;
+  waterAppearance: WaterAppearance | null;
+  unitCutInPressureGaugePa: number | null;
+  unitCutOutPressureGaugePa: number | null;
   surfaceTemperatures: SurfaceTemperature[];
 }
 
 export interface ReadingFlag {
-  key: HeatingCheckKey;
+  key: CheckKey;
   level: CheckFlagLevel;
   message: string;
 }
@@ -37,9 +64,11 @@ export interface CheckSettings {
   siteId: number;
   /** The asset's `system` text; null when the item is not on a named system. */
   systemName: string | null;
-  settings: HeatingSystemSettings;
+  settings: CheckSettingsValues;
   /** Per setting, in words: "System settings", "Pressurisation unit PU-1", "This reading". */
-  sources: Partial<Record<keyof HeatingSystemSettings, string>>;
+  sources: Partial<Record<keyof CheckSettingsValues, string>>;
+  /** The gas appliance as the register records it (fuel, burner pressure); family null when not a gas appliance. */
+  appliance: GasAppliance;
 }
 
 export interface ReadingSet {
@@ -81,6 +110,12 @@ export interface HeatingSystem {
   maxFlowTemperatureC: number | null;
   fillTemperatureC: number | null;
   preChargeMarginBar: number | null;
+  glycolKind: GlycolKind | null;
+  glycolPercent: number | null;
+  compensationOutsideLowC: number | null;
+  compensationFlowAtLowC: number | null;
+  compensationOutsideHighC: number | null;
+  compensationFlowAtHighC: number | null;
   /** Register items on this site with this system text. */
   assetCount: number;
   updatedAt: string | null;
@@ -131,4 +166,17 @@ export interface LatestReadingExport {
   values: ReadingValues;
   flags: ReadingFlag[];
   note: string;
+}
+
+/** The latest current set of one item on a site, with its flags: the site's list of what needs attention. */
+export interface LatestFlaggedReading {
+  assetId: number;
+  plantId: string;
+  assetName: string;
+  plantRoomName: string | null;
+  readingId: number;
+  takenAt: string;
+  takenBy: string;
+  worstFlag: CheckFlagLevel;
+  flags: ReadingFlag[];
 }

@@ -6,6 +6,7 @@ import { Card } from '@/components/ui/card';
 import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
+import { PendingForRecord } from '@/components/offline/pending-actions';
 import { TagActions } from '@/components/tags/tag-actions';
 import { TagFacts } from '@/components/tags/tag-facts';
 import { TagHeader } from '@/components/tags/tag-header';
@@ -48,6 +49,7 @@ export default function TagScreen() {
           <Screen>
             {me && me.role !== 'viewer' ? <TagNoticesBanner /> : null}
             <TagHeader tag={t} now={now} />
+            <PendingForRecord tagId={t.id} />
             {isWide ? (
               <View style={{ flexDirection: 'row', gap: space.lg, alignItems: 'flex-start' }}>
                 <View style={{ flex: 3, gap: space.lg }}>

@@ -40,8 +40,8 @@ describe('reading form entries', () => {
     expect(form.entries.systemPressureGaugePa).toBe('1.85');
     expect(form.entries.flowRateM3PerS).toBe('2.5');
     expect(describeValues(values)).toEqual([
-      { label: 'System pressure', text: '1.85 bar' },
       { label: 'Flow rate', text: '2.5 L/s' },
+      { label: 'System pressure', text: '1.85 bar' },
       { label: 'Flue', text: '140 °C' },
     ]);
   });
@@ -51,7 +51,7 @@ describe('expansion vessel form', () => {
   it('converts m³ and kPa to the calculator’s litres and bar, and keeps vessel errors on their rows', () => {
     const form = { ...initialVesselForm(), systemVolume: '0.5', systemVolumeUnit: 'm3', fillTemperatureC: '10', maxFlowTemperatureC: '80', staticHeightM: '5', safetyValve: '300', safetyValveUnit: 'kPa', vessels: ['50', ''] };
     const { body, unreadable } = vesselFormToRequest(form);
-    expect(body).toMatchObject({ systemVolumeL: 500, safetyValveSettingBarGauge: 3, installedVesselVolumesL: [50], preChargeBarGauge: null, preChargeMarginBar: 0.3 });
+    expect(body).toMatchObject({ systemVolumeL: 500, safetyValveSettingBarGauge: 3, installedVesselVolumesL: [50], preChargeBarGauge: null, preChargeMarginBar: 0.2 });
     expect(unreadable).toEqual({ 'vessels.1': 'Enter the vessel volume or remove this row.' });
     expect(vesselFormPath('installedVesselVolumesL[1]')).toBe('vessels.1');
     expect(vesselFormPath('systemVolumeL')).toBe('systemVolume');

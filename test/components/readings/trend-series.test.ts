@@ -6,7 +6,7 @@ import type { ReadingSet } from '@/shared/types/readings';
 
 const set = (id: number, takenAt: string, values: Partial<ReadingSet['values']>, over: Partial<ReadingSet> = {}): ReadingSet => ({
   id, assetId: 1, takenAt, values: { ...emptyReadingValues(), ...values }, note: '', results: [], flags: [],
-  settingsUsed: { siteId: 1, systemName: null, settings: {}, sources: {} }, createdBy: { id: 1, name: 'A' }, createdAt: takenAt,
+  settingsUsed: { siteId: 1, systemName: null, settings: {}, sources: {}, appliance: { family: null } }, createdBy: { id: 1, name: 'A' }, createdAt: takenAt,
   supersedesId: null, correctionReason: null, supersededBy: null, ...over,
 });
 
@@ -34,7 +34,7 @@ describe('buildTrendSeries', () => {
 
 describe('chart scales', () => {
   it('draws the safety valve setting as a danger line on the pressure chart', () => {
-    const lines = referenceLines({ siteId: 1, systemName: 'S', settings: { safetyValveSettingGaugePa: barToPa(3), designDeltaTK: 11 }, sources: {} });
+    const lines = referenceLines({ siteId: 1, systemName: 'S', settings: { safetyValveSettingGaugePa: barToPa(3), designDeltaTK: 11 }, sources: {}, appliance: { family: null } });
     expect(lines).toContainEqual({ group: 'pressure', label: 'Safety valve', value: 3, tone: 'danger' });
     expect(lines).toContainEqual({ group: 'delta-t', label: 'Design', value: 11, tone: 'neutral' });
   });

@@ -15,10 +15,10 @@ import {
   planQr,
   renderLabelsPdf,
   toPrintable,
-  type LabelLayout,
   type LabelRect,
   type PlantLabel,
 } from '@/server/lib/label-pdf';
+import type { LabelLayout } from '@/shared/schemas/queries';
 import { formatLabelCode, generateLabelCode, labelUrl } from '@/shared/rules/label-code';
 import { PX_PER_MM, crop, darkBox, decodeQr, isDark, mmBox, rasterisePdf, toGray } from '@/test/support/raster-helpers';
 

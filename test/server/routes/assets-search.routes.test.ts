@@ -1,6 +1,7 @@
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildAssetListSql, readAssetListFilters } from '@/server/services/asset-search';
+import { buildAssetListSql } from '@/server/services/asset-search';
+import { assetListQuery } from '@/shared/schemas/queries';
 import { generateLabelCode } from '@/shared/rules/label-code';
 import { createOrganisation, setupTestApp, tokenFor, type TestApp } from '@/test/setup/app';
 import { as, assetBody, created, roomBody, siteBody, type Client } from '@/test/server/support/register';
@@ -122,7 +123,7 @@ describe('search query plan', () => {
       rows.flat(),
     );
     await t.db.rootQuery('ANALYZE TABLE assets');
-    const sql = buildAssetListSql(orgId, readAssetListFilters({ q: 'mixing valve' }), { pageSize: 50, offset: 0 });
+    const sql = buildAssetListSql(orgId, assetListQuery.validateSync({ q: 'mixing valve' }), { pageSize: 50, offset: 0 });
     expect(sql.idsSql).toContain('MATCH(name, system)');
     const plan = await t.db.sequelize.query<{ table: string; type: string; key: string | null }>(`EXPLAIN ${sql.idsSql}`, {
       replacements: sql.replacements,
@@ -136,7 +137,7 @@ describe('search query plan', () => {
   });
 
   it('pages the unfiltered list in plant ID order straight from an index, without sorting the table', async () => {
-    const sql = buildAssetListSql(orgId, readAssetListFilters({}), { pageSize: 50, offset: 0 });
+    const sql = buildAssetListSql(orgId, assetListQuery.validateSync({}), { pageSize: 50, offset: 0 });
     const plan = await t.db.sequelize.query<{ table: string; key: string | null; Extra: string }>(`EXPLAIN ${sql.idsSql}`, {
       replacements: sql.replacements,
       type: QueryTypes.SELECT,

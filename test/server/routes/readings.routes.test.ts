@@ -66,7 +66,8 @@ describe('GET /api/assets/:id/readings', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ items: [], total: 0, page: 1 });
     expect(res.body.checkSettings.systemName).toBe('LTHW 1');
-    expect(res.body.checkSettings.settings).toEqual({ flowSetpointC: 80, fillPressureGaugePa: barToPa(1) });
+    expect(res.body.checkSettings.settings).toEqual({ flowSetpointC: 80, fillPressureGaugePa: barToPa(1), vesselPreChargeGaugePa: barToPa(0.8) });
+    expect(res.body.checkSettings.sources.vesselPreChargeGaugePa).toMatch(/Lowest vessel pre-charge/);
     expect(res.body.checkSettings.sources.fillPressureGaugePa).toBe('Pressurisation unit PU-01 in the register');
   });
 
@@ -197,7 +198,8 @@ describe('POST /api/readings/:id/correct', () => {
   });
 
   it('appends a correction that supersedes the original, keeping the original visible and unchanged', async () => {
-    expect(original.flags.map((f) => f.level)).toEqual(['danger']);
+    // EN 12828 Annex D: 2.9 bar lies between p_e = 3 − 0.5 = 2.5 bar and the 3 bar safety valve → caution
+    expect(original.flags.map((f) => f.level)).toEqual(['caution']);
     const res = await as('engineer').post(`/api/readings/${original.id}/correct`, { systemPressureGaugePa: barToPa(1.9), reason: 'Read the wrong gauge' });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ supersedesId: original.id, correctionReason: 'Read the wrong gauge', takenAt: original.takenAt, flags: [] });
@@ -235,7 +237,8 @@ describe('GET /api/sites/:id/systems/:name/expansion-check', () => {
     expect(res.body.result.requiredNominalVolumeL).toBeCloseTo(35.7, 0);
     expect(res.body.result.installedNominalVolumeL).toBe(75);
     expect(res.body.result.verdict).toBe('pass');
-    expect(res.body.settings.preChargeMarginBar).toBe(0.3);
+    // EN 12828 Annex D: the standard's own 0.2 bar margin is the default
+    expect(res.body.settings.preChargeMarginBar).toBe(0.2);
   });
 
   it('says what is missing instead of guessing, and hides other organisations’ sites', async () => {

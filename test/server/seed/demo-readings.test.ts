@@ -4,6 +4,7 @@ import path from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { LocalPhotoStorage } from '@/server/lib/photo-storage-local';
+import { Asset } from '@/server/models/asset.model';
 import { Reading } from '@/server/models/reading.model';
 import { User } from '@/server/models/user.model';
 import { seedDemo } from '@/server/seed/demo';
@@ -23,7 +24,8 @@ afterAll(async () => {
 
 describe('demo readings', () => {
   it('gives the demo primary pump a few weeks of sets, one corrected by its author, checked by the server', async () => {
-    const rows = await Reading.findAll({ order: [['takenAt', 'ASC'], ['id', 'ASC']] });
+    const pump = await Asset.findOne({ where: { plantId: 'P-01A' }, order: [['id', 'ASC']] });
+    const rows = await Reading.findAll({ where: { assetId: pump!.id }, order: [['takenAt', 'ASC'], ['id', 'ASC']] });
     expect(rows).toHaveLength(8);
     const correction = rows.find((r) => r.supersedesId !== null)!;
     const typo = rows.find((r) => r.id === correction.supersedesId)!;
@@ -36,7 +38,20 @@ describe('demo readings', () => {
 
   it('is seeded once: a second run adds nothing', async () => {
     await seedDemo(t.db.sequelize, { bcryptCost: 4, storage: new LocalPhotoStorage(dir) });
-    expect(await Reading.count()).toBe(8);
+    expect(await Reading.count()).toBe(8 + 9);
+  });
+
+  it('gives a boiler, a calorifier and a pressurisation unit a whole visit’s readings, with their flags', async () => {
+    const latest = async (plantId: string) => {
+      const asset = await Asset.findOne({ where: { plantId }, order: [['id', 'ASC']] });
+      return (await Reading.findAll({ where: { assetId: asset!.id }, order: [['takenAt', 'DESC']] }))[0];
+    };
+    const boiler = await latest('B-01');
+    expect(boiler.results.map((r) => r.key)).toEqual(expect.arrayContaining(['gas-working-pressure', 'burner-pressure', 'flue-co-co2-ratio']));
+    expect(boiler.flags).toEqual([]);
+    // HSE ACOP L8: 57.5 °C is below the 60 °C store temperature
+    expect((await latest('CAL-01')).flags.map((f) => [f.key, f.level])).toEqual([['store-temperature', 'caution']]);
+    expect((await latest('PU-01')).flags.map((f) => f.key)).toEqual(['inhibitor']);
   });
 
   it('lets the demo system pass the vessel check with its 300 L vessel', async () => {

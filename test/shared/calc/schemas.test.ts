@@ -83,7 +83,10 @@ describe('expansionVesselInputsSchema', () => {
   };
 
   it('accepts a complete set and defaults the vessel list to empty', async () => {
-    await expect(expansionVesselInputsSchema.validate(inputs)).resolves.toEqual(inputs);
+    await expect(expansionVesselInputsSchema.validate(inputs)).resolves.toEqual({ ...inputs, mode: 'check', glycol: null });
+    await expect(expansionVesselInputsSchema.validate({ ...inputs, glycol: { kind: 'propylene', percent: 30 } })).resolves.toMatchObject({ glycol: { kind: 'propylene', percent: 30 } });
+    await expect(expansionVesselInputsSchema.validate({ ...inputs, glycol: { kind: 'brine', percent: 30 } })).rejects.toThrow(/propylene or ethylene/);
+    await expect(expansionVesselInputsSchema.validate({ ...inputs, mode: 'guess' })).rejects.toThrow(/check or size/);
     const { installedVesselVolumesL: _omitted, ...withoutVessels } = inputs;
     await expect(expansionVesselInputsSchema.validate(withoutVessels)).resolves.toMatchObject({
       installedVesselVolumesL: [],

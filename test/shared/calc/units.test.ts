@@ -6,6 +6,9 @@ import {
   fromSi,
   headMToPa,
   kPaToPa,
+  mbarToPa,
+  paToKPa,
+  paToMbar,
   litresPerMinuteToM3PerS,
   litresPerSecondToM3PerS,
   litresToM3,
@@ -58,6 +61,24 @@ describe('unit conversions', () => {
     );
   });
 
+  it('round-trips mbar, kPa and bar through Pa and through each other', () => {
+    // ISO 80000-4: 1 bar = 1000 mbar = 100 kPa = 10^5 Pa, so 1 mbar = 100 Pa = 0.1 kPa
+    expect(mbarToPa(1)).toBe(100);
+    expect(paToMbar(barToPa(1))).toBe(1000);
+    expect(paToKPa(mbarToPa(20))).toBe(2);
+    fc.assert(
+      fc.property(finite, (mbar) => {
+        expect(paToMbar(mbarToPa(mbar))).toBeCloseTo(mbar, 6);
+        expect(paToKPa(kPaToPa(mbar))).toBeCloseTo(mbar, 6);
+        // mbar → bar → kPa → mbar: 1000 mbar = 1 bar = 100 kPa
+        const viaAll = paToMbar(kPaToPa(paToKPa(barToPa(paToBar(mbarToPa(mbar))))));
+        expect(Math.abs(viaAll - mbar)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(mbar)));
+        // the same pressure read as gas pressure (mbar default) and as system pressure (bar default) agrees
+        expect(toSi('gasPressure', 'mbar', mbar)).toBeCloseTo(toSi('pressure', 'bar', mbar / 1000), 6);
+      }),
+    );
+  });
+
   it('round-trips toSi/fromSi for every unit offered on forms', () => {
     const pairs = (Object.keys(UNIT_OPTIONS) as PhysicalQuantity[]).flatMap((quantity) =>
       UNIT_OPTIONS[quantity].map((option) => [quantity, option.key] as const),
@@ -72,7 +93,8 @@ describe('unit conversions', () => {
   });
 
   it('offers the units the trade uses per quantity', () => {
-    expect(UNIT_OPTIONS.pressure.map((u) => u.key)).toEqual(['bar', 'kPa']);
+    expect(UNIT_OPTIONS.pressure.map((u) => u.key)).toEqual(['bar', 'kPa', 'mbar']);
+    expect(UNIT_OPTIONS.gasPressure.map((u) => u.key)).toEqual(['mbar', 'kPa', 'bar']);
     expect(UNIT_OPTIONS.flow.map((u) => u.key)).toEqual(['L/s', 'L/min', 'm3/h']);
     expect(UNIT_OPTIONS.temperature.map((u) => u.label)).toEqual(['°C']);
     expect(UNIT_OPTIONS.length.map((u) => u.key)).toEqual(['m']);

@@ -6,7 +6,8 @@ import type { HeatingSystem, RegisterVessel } from '@/shared/types/readings';
 const system = (over: Partial<HeatingSystem> = {}): HeatingSystem => ({
   siteId: 1, name: 'LTHW 1', configured: true, designDeltaTK: 20, flowSetpointC: 70, fillPressureGaugePa: null,
   safetyValveSettingGaugePa: barToPa(3), systemVolumeM3: 0.5, staticHeightM: 5, maxFlowTemperatureC: 80, fillTemperatureC: 10,
-  preChargeMarginBar: null, assetCount: 3, updatedAt: null, updatedBy: null, ...over,
+  preChargeMarginBar: null, glycolKind: null, glycolPercent: null, compensationOutsideLowC: null, compensationFlowAtLowC: null,
+  compensationOutsideHighC: null, compensationFlowAtHighC: null, assetCount: 3, updatedAt: null, updatedBy: null, ...over,
 });
 const ctx = (over: Partial<RegisterContext> = {}): RegisterContext => ({
   siteId: 1, systemName: 'LTHW 1', system: system(), pressurisationUnits: [{ plantId: 'PU-01', fillPressureBar: 1.2 }], assetFlowSetpointC: null, ...over,
@@ -47,6 +48,50 @@ describe('runReadingChecks', () => {
   });
 });
 
+describe('runReadingChecks on a weather-compensated system', () => {
+  // An invented curve: 80 °C flow at −3 °C outside, 40 °C at 18 °C outside.
+  const compensated = ctx({
+    assetFlowSetpointC: 80,
+    system: system({ compensationOutsideLowC: -3, compensationFlowAtLowC: 80, compensationOutsideHighC: 18, compensationFlowAtHighC: 40 }),
+  });
+
+  it('does not flag a compensated system running cooler on a mild day', () => {
+    const values = { ...emptyReadingValues(), flowTemperatureC: 52, returnTemperatureC: 40, outsideTemperatureC: 12 };
+    const { results, flags, settingsUsed } = runReadingChecks(values, resolveCheckSettings(compensated));
+    // 80 − 40/21 · 15 = 51.43 °C at 12 °C outside (worked by hand); 52 °C is within the ±2 K deadband
+    expect(settingsUsed.settings.flowSetpointC).toBeCloseTo(51.43, 2);
+    expect(settingsUsed.sources.flowSetpointC).toMatch(/Weather compensation/);
+    expect(results.find((r) => r.key === 'flow-setpoint-deviation')?.flag).toBeUndefined();
+    expect(flags.filter((f) => f.key === 'flow-setpoint-deviation')).toEqual([]);
+    // the same flow against the fixed 80 °C setpoint would be well below it
+    const fixed = runReadingChecks(values, resolveCheckSettings(ctx({ assetFlowSetpointC: 80 })));
+    expect(fixed.flags.find((f) => f.key === 'flow-setpoint-deviation')?.level).toBe('caution');
+  });
+
+  it('skips the setpoint check when the outside temperature was not read', () => {
+    const values = { ...emptyReadingValues(), flowTemperatureC: 52, returnTemperatureC: 40 };
+    const { results, settingsUsed } = runReadingChecks(values, resolveCheckSettings(compensated));
+    expect(results.find((r) => r.key === 'flow-setpoint-deviation')).toBeUndefined();
+    expect(settingsUsed.sources.flowSetpointC).toMatch(/enter the outside temperature/);
+  });
+});
+
+describe('runReadingChecks for a visit', () => {
+  it('checks a calorifier, a boiler’s gas and flue gas, and a pressurisation unit from one set of rules', () => {
+    const values = {
+      ...emptyReadingValues(), storeTemperatureC: 30, gasWorkingPressurePa: 1900, flueCo2Percent: 9, flueCoPpm: 900,
+      unitCutInPressureGaugePa: barToPa(1.1), unitCutOutPressureGaugePa: barToPa(1.5),
+    };
+    const settings = resolveCheckSettings(ctx({ gasFamily: 'natural-gas', vesselPreChargeBar: 0.9 }));
+    expect(settings.settings.vesselPreChargeGaugePa).toBe(barToPa(0.9));
+    const { flags, results } = runReadingChecks(values, settings);
+    // HSE ACOP L8: 30 °C is in the 20–45 °C growth range → danger; from memory, BS 7967: ratio 0.01 > 0.008 → danger
+    expect(flags.map((f) => [f.key, f.level])).toEqual([['flue-co', 'caution'], ['flue-co-co2-ratio', 'danger'], ['store-temperature', 'danger']]);
+    expect(results.map((r) => r.key)).toEqual(['unit-cut-in', 'unit-cut-out', 'gas-working-pressure', 'flue-co', 'flue-co-co2-ratio', 'store-temperature']);
+    expect(results.every((r) => r.source)).toBe(true);
+  });
+});
+
 describe('expansionInputsFor', () => {
   const vessels: RegisterVessel[] = [
     { assetId: 1, plantId: 'EV-01', name: 'Vessel 1', capacityL: 50, preChargeBar: 1 },
@@ -58,8 +103,10 @@ describe('expansionInputsFor', () => {
     expect(missing).toEqual([]);
     expect(complete).toEqual({
       systemVolumeL: m3ToLitres(0.5), fillTemperatureC: 10, maxFlowTemperatureC: 80, staticHeightM: 5,
-      safetyValveSettingBarGauge: 3, preChargeBarGauge: 0.9, installedVesselVolumesL: [50, 35],
+      safetyValveSettingBarGauge: 3, preChargeBarGauge: 0.9, installedVesselVolumesL: [50, 35], glycol: null,
     });
+    const glycol = expansionInputsFor(system({ glycolKind: 'propylene', glycolPercent: 25 }), vessels).complete;
+    expect(glycol?.glycol).toEqual({ kind: 'propylene', percent: 25 });
   });
 
   it('lists what is missing instead of guessing', () => {

@@ -12,6 +12,7 @@ import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { AssetLabelCard } from '@/components/labels/asset-label-card';
+import { ItemOffline } from '@/components/offline/pending-actions';
 import { AssetReadingsSection } from '@/components/readings/asset-readings-section';
 import { AssetDetails } from '@/components/register/asset-details';
 import { AssetStateSlot } from '@/components/register/asset-state-slot';
@@ -59,6 +60,7 @@ export default function AssetScreen() {
             </View>
             {a.archived ? <Notice tone="info" word="Archived">This item is no longer in service. Its record is kept for history.</Notice> : null}
             <AssetStateSlot asset={a} />
+            <ItemOffline asset={a} />
             {a.archived ? null : <VisitBanner siteId={a.siteId} siteName={a.siteName} next={`/assets/${id}`} now={now} />}
             <AssetDetails asset={a} />
             <AssetReadingsSection asset={a} />

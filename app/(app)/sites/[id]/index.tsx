@@ -9,6 +9,7 @@ import { Notice } from '@/components/ui/notice';
 import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
+import { SiteReadingFlags } from '@/components/readings/site-reading-flags';
 import { Breadcrumbs } from '@/components/register/breadcrumbs';
 import { DetailList } from '@/components/register/detail-list';
 import { PlantRoomList } from '@/components/register/plant-room-list';
@@ -57,6 +58,7 @@ export default function SiteScreen() {
             {rooms.isError ? <Notice tone="danger" word="Cannot load">{errorMessage(rooms.error)}</Notice> : null}
             {rooms.data ? <PlantRoomList rooms={rooms.data.items} /> : rooms.isPending ? <LoadingView /> : null}
           </View>
+          <SiteReadingFlags siteId={id} />
           <SiteVisitsCard siteId={id} now={now} />
           {s.assetCount ? (
             <Card>

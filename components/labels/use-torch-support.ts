@@ -1,0 +1,4 @@
+/** Native cameras report a torch through expo-camera itself; offer the switch there. */
+export function useTorchSupport(): boolean {
+  return true;
+}

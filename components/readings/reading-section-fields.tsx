@@ -1,0 +1,68 @@
+import { getIn, useFormikContext } from 'formik';
+import { StyleSheet, View } from 'react-native';
+import { MeasurementField } from '@/components/readings/measurement-field';
+import { CHOICE_FIELD_DEFS, isChoiceKey, READING_FIELD_DEFS, type ReadingFormValues } from '@/components/readings/reading-fields';
+import { space } from '@/components/theme';
+import { useBreakpoints } from '@/components/theme/use-breakpoints';
+import { Notice } from '@/components/ui/notice';
+import { SelectField } from '@/components/ui/select-field';
+import { Text } from '@/components/ui/text';
+import { GAS_WORK_CAUTION, UNIT_OPTIONS } from '@/shared/calc';
+import type { ReadingSection } from '@/shared/rules/reading-sections';
+
+/** One section of the reading form (gas, flue gas, hot water …): its fields, bound to the form. */
+export function ReadingSectionFields({ section }: { section: ReadingSection }) {
+  const { isWide } = useBreakpoints();
+  const { values, errors, touched, submitCount, setFieldValue, setFieldTouched } = useFormikContext<ReadingFormValues>();
+  const show = (path: string) => (submitCount > 0 || getIn(touched, path) ? (getIn(errors, path) as string | undefined) : undefined);
+  return (
+    <View style={{ gap: space.xs }} testID={`reading-section-${section.key}`}>
+      <Text variant="title">{section.title}</Text>
+      {section.key === 'gas' ? <Notice tone="caution" title="Gas work">{GAS_WORK_CAUTION}</Notice> : null}
+      <View style={[isWide && styles.wide]}>
+        {section.fields.map((key) => {
+          if (isChoiceKey(key)) {
+            const def = CHOICE_FIELD_DEFS[key];
+            return (
+              <View key={key} style={isWide ? styles.fieldWide : styles.choice}>
+                <SelectField
+                  label={def.label}
+                  value={values.choices[key]}
+                  options={Object.entries(def.options).map(([value, label]) => ({ value, label }))}
+                  onChange={(v) => setFieldValue(`choices.${key}`, v)}
+                  placeholder="Not tested"
+                  clearable
+                  error={show(`choices.${key}`)}
+                  testID={`reading-${key}`}
+                />
+              </View>
+            );
+          }
+          const f = READING_FIELD_DEFS[key];
+          return (
+            <View key={key} style={isWide ? styles.fieldWide : undefined}>
+              <MeasurementField
+                label={f.label}
+                hint={f.hint}
+                value={values.entries[key]}
+                onChangeText={(t) => setFieldValue(`entries.${key}`, t)}
+                onBlur={() => setFieldTouched(`entries.${key}`, true)}
+                unit={values.units[key]}
+                units={UNIT_OPTIONS[f.quantity]}
+                onUnitChange={(u) => setFieldValue(`units.${key}`, u)}
+                error={show(`entries.${key}`)}
+                testID={`reading-${key}`}
+              />
+            </View>
+          );
+        })}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wide: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg },
+  fieldWide: { flexBasis: 300, flexGrow: 1 },
+  choice: { marginBottom: space.sm },
+});
