@@ -9,6 +9,7 @@ import { Text } from '@/components/ui/text';
 import { AuditLog } from '@/components/team/audit-log';
 import { InviteForm } from '@/components/team/invite-form';
 import { MemberCard } from '@/components/team/member-card';
+import { UndeliveredMail } from '@/components/team/undelivered-mail';
 import { errorMessage } from '@/hooks/api/request';
 import { useSitesQuery } from '@/hooks/api/use-sites';
 import { useTeamQuery } from '@/hooks/api/use-team';
@@ -34,6 +35,7 @@ export default function TeamScreen() {
   return (
     <Screen title="Team" subtitle="People, roles and site access · every change is logged">
       <InviteForm />
+      <UndeliveredMail enabled={isAdmin} />
       <View style={{ flexDirection: isWide ? 'row' : 'column', gap: space.lg, alignItems: 'flex-start' }}>
         <View style={{ flex: isWide ? 3 : undefined, width: isWide ? undefined : '100%', gap: space.sm }}>
           <Text variant="title">{team.data ? `People (${team.data.total})` : 'People'}</Text>

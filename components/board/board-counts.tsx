@@ -43,7 +43,7 @@ export function BoardCounts({ counts, siteId, state, onSite, onState }: Props) {
                 role="listitem"
                 accessibilityRole="button"
                 accessibilityState={{ selected: on }}
-                accessibilityLabel={`${s.siteName}: ${s.total} live, ${s.overdue} overdue, ${s.dueSoon} due within 24 hours${on ? ', shown' : ''}`}
+                accessibilityLabel={`${s.siteName}: ${s.total} live, ${s.overdue} past expiry, ${s.dueSoon} due within 24 hours${on ? ', shown' : ''}`}
                 onPress={() => onSite(on ? null : s.siteId)}
                 style={StyleSheet.flatten([styles.site, on && styles.siteOn])}
                 testID={`count-site-${s.siteId}`}
@@ -51,7 +51,7 @@ export function BoardCounts({ counts, siteId, state, onSite, onState }: Props) {
                 <MaterialCommunityIcons name={on ? 'check-circle' : 'office-building-outline'} size={20} color={on ? colors.brandInk : colors.ink} />
                 <Text variant="label" bold style={{ color: on ? colors.brandInk : colors.ink }} numberOfLines={1}>{s.siteName}</Text>
                 <Text variant="label" style={{ color: on ? colors.brandInk : colors.ink }}>
-                  {`· ${s.total} live${s.overdue ? `, ${s.overdue} overdue` : ''}`}
+                  {`· ${s.total} live${s.overdue ? `, ${s.overdue} past expiry` : ''}`}
                 </Text>
               </Pressable>
             );

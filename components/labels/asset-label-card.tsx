@@ -1,3 +1,4 @@
+import { formatDate } from '@/components/register/register-vocabulary';
 import { useState } from 'react';
 import { Platform, StyleSheet, View } from 'react-native';
 import QRCode from 'react-native-qrcode-svg';
@@ -40,7 +41,7 @@ export function AssetLabelCard({ asset }: { asset: Asset }) {
       {canReplace ? <Button title="Replace label…" variant="quiet" onPress={() => setConfirming(true)} testID="replace-label" /> : null}
       {retired.data?.length ? (
         <Text variant="small" muted>
-          Earlier labels, no longer valid: {retired.data.map((r) => `${formatLabelCode(r.code)} (replaced ${new Date(r.retiredAt).toLocaleDateString()})`).join(', ')}
+          Earlier labels, no longer valid: {retired.data.map((r) => `${formatLabelCode(r.code)} (replaced ${formatDate(r.retiredAt)})`).join(', ')}
         </Text>
       ) : null}
       <ConfirmDialog

@@ -75,10 +75,11 @@ const styles = StyleSheet.create({
   side: { width: layout.sideNavWidth, backgroundColor: colors.ink, paddingVertical: space.lg, paddingHorizontal: space.sm, gap: space.xs },
   sideBrand: { flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingHorizontal: space.sm, marginBottom: space.lg },
   sideItem: { flexDirection: 'row', alignItems: 'center', gap: space.md, minHeight: layout.minTouch, paddingHorizontal: space.md, borderRadius: 8 },
-  sideItemActive: { backgroundColor: colors.caution },
+  // The current place is marked in a neutral tone: yellow and red are kept for caution and danger.
+  sideItemActive: { backgroundColor: colors.paper },
   sideUser: { marginTop: 'auto', padding: space.sm, gap: 2, borderTopWidth: 1, borderTopColor: colors.inkMuted, paddingTop: space.md },
   tabs: { flexDirection: 'row', backgroundColor: colors.ink, paddingTop: space.xs },
   tab: { flex: 1, alignItems: 'center', minHeight: layout.minTouch + 12, justifyContent: 'center', gap: 2 },
   tabIcon: { paddingHorizontal: space.md, paddingVertical: 2, borderRadius: 999 },
-  tabIconActive: { backgroundColor: colors.caution },
+  tabIconActive: { backgroundColor: colors.paper },
 });

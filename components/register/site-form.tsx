@@ -41,7 +41,7 @@ export function SiteForm({ site, submitLabel, onSubmit, onCancel }: { site?: Sit
             <Text variant="title">Site</Text>
             <FormTextField name="name" label="Site name" />
             <FormTextField name="address" label="Address" multiline numberOfLines={3} style={{ minHeight: 96, paddingTop: space.sm, textAlignVertical: 'top' }} />
-            <FormTextField name="timeZone" label="Time zone" hint="IANA name, e.g. Europe/London" autoCapitalize="none" autoCorrect={false} />
+            <FormTextField name="timeZone" label="Time zone" hint="Region and city, e.g. Europe/London or America/New_York" autoCapitalize="none" autoCorrect={false} />
           </Card>
           <Card>
             <Text variant="title">Client contact</Text>

@@ -45,7 +45,7 @@ export function AssetStateBanner(props: StateSource) {
       {s.overdue ? (
         <View style={[styles.overdue, { backgroundColor: TONE_COLORS.mandatory.solid }]} testID="asset-state-overdue">
           <MaterialCommunityIcons name={STATE_LOOK.overdue.icon} size={24} color={colors.brandInk} />
-          <Text bold style={{ color: colors.brandInk, flex: 1 }}>{`Overdue — ${STATE_LOOK.overdue.meaning}`}</Text>
+          <Text bold style={{ color: colors.brandInk, flex: 1 }}>{`${STATE_LOOK.overdue.word} — ${STATE_LOOK.overdue.meaning}`}</Text>
         </View>
       ) : null}
     </View>

@@ -79,7 +79,7 @@ export function ExpiryPicker({ value, onChange, timeZone, role, error, testID = 
         ) : (
           <Text bold>{value ? 'That date and time cannot be read.' : 'No expiry chosen yet.'}</Text>
         )}
-        <Text variant="small" muted>{`Times are at the site (${zoneName(timeZone)}). Your role may set up to ${maxExpiryDays(role)} days ahead. A tag never clears itself: past its expiry it shows as overdue until a person clears it.`}</Text>
+        <Text variant="small" muted>{`Times are at the site (${zoneName(timeZone)}). Your role may set up to ${maxExpiryDays(role)} days ahead. A tag never clears itself: past its expiry it stays in force, marked “past expiry”, until a person clears it.`}</Text>
       </View>
       {error ? <Text variant="small" style={{ color: colors.danger }} accessibilityLiveRegion="polite">{`⚠ ${error}`}</Text> : null}
     </View>

@@ -31,7 +31,7 @@ export function TagCard({ tag, now }: { tag: Tag; now: Date }) {
         <View style={[styles.expiry, overdue && styles.expiryOverdue]}>
           <MaterialCommunityIcons name={overdue ? STATE_LOOK.overdue.icon : 'calendar-clock'} size={18} color={overdue ? colors.brandInk : colors.ink} />
           <Text variant="small" bold style={{ color: overdue ? colors.brandInk : colors.ink, flexShrink: 1 }}>
-            {`${overdue ? 'Overdue' : 'Live'} · ${expiryPhrase(tag.expiresAt, now)} · ${formatInZone(tag.expiresAt, tag.asset.timeZone, now)}`}
+            {`${overdue ? STATE_LOOK.overdue.word : 'Live'} · ${expiryPhrase(tag.expiresAt, now)} · ${formatInZone(tag.expiresAt, tag.asset.timeZone, now)}`}
           </Text>
         </View>
       </Pressable>

@@ -18,7 +18,7 @@ export function TagStateBadge(props: StateSource & { hideNormal?: boolean; now?:
     <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.xs }} testID={props.testID ?? 'tag-state-badge'}>
       <Badge tone={look.tone} icon={look.icon} label={main} />
       {s.state === 'isolated' && s.liveOverrides > 0 ? <Badge tone={STATE_LOOK.overridden.tone} icon={STATE_LOOK.overridden.icon} label="Overridden" /> : null}
-      {s.overdue ? <Badge tone={STATE_LOOK.overdue.tone} icon={STATE_LOOK.overdue.icon} label="Overdue" /> : null}
+      {s.overdue ? <Badge tone={STATE_LOOK.overdue.tone} icon={STATE_LOOK.overdue.icon} label={STATE_LOOK.overdue.word} /> : null}
     </View>
   );
 }

@@ -1,4 +1,5 @@
 /** Times on tags: shown at the site, in the site's zone and named, so a night-shift reading is never ambiguous. */
+import { deviceZone } from '@/components/places/zone';
 import { endOfDayInZone, localDate, zonedTimeToUtc } from '@/shared/rules/time-zone';
 
 const parts = (instant: Date, timeZone: string) =>
@@ -11,8 +12,11 @@ const parts = (instant: Date, timeZone: string) =>
 /** "Europe/London" → "Europe/London"; "America/New_York" → "America/New York". */
 export const zoneName = (timeZone: string) => timeZone.replace(/_/g, ' ');
 
-/** "Tue 14 May, 23:59 (Europe/London)"; the year only when it is not this year at the site. */
-export function formatInZone(iso: string | Date, timeZone: string, now = new Date()): string {
+/**
+ * "Tue 14 May, 23:59 (Europe/London)"; the year only when it is not this year at the site, and the zone only
+ * when the site's differs from the viewer's own.
+ */
+export function formatInZone(iso: string | Date, timeZone: string, now = new Date(), viewerZone = deviceZone()): string {
   const instant = typeof iso === 'string' ? new Date(iso) : iso;
   if (Number.isNaN(instant.getTime())) return '—';
   const p = Object.fromEntries(
@@ -22,7 +26,8 @@ export function formatInZone(iso: string | Date, timeZone: string, now = new Dat
   );
   // Put together from parts: the platforms' own patterns differ in their commas.
   const year = p.year === parts(now, timeZone).year ? '' : ` ${p.year}`;
-  return `${p.weekday} ${p.day} ${p.month}${year}, ${p.hour}:${p.minute} (${zoneName(timeZone)})`;
+  const zone = timeZone === viewerZone ? '' : ` (${zoneName(timeZone)})`;
+  return `${p.weekday} ${p.day} ${p.month}${year}, ${p.hour}:${p.minute}${zone}`;
 }
 
 /** The wall-clock date and time at the site, for the precise-entry fields. */
@@ -55,10 +60,10 @@ export function humanDuration(ms: number): string {
   return hours % 24 ? `${days} d ${hours % 24} h` : `${days} d`;
 }
 
-/** "expires in 3 h" or "overdue by 2 h" for a live tag. */
+/** "expires in 3 h" or "past expiry by 2 h" for a live tag (a late service is "overdue"; a tag is not). */
 export function expiryPhrase(expiresAt: string, now: Date): string {
   const left = new Date(expiresAt).getTime() - now.getTime();
-  return left >= 0 ? `expires in ${humanDuration(left)}` : `overdue by ${humanDuration(left)}`;
+  return left >= 0 ? `expires in ${humanDuration(left)}` : `past expiry by ${humanDuration(left)}`;
 }
 
 /** "3 h ago" for history lines. */

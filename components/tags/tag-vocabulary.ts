@@ -15,7 +15,7 @@ export const STATE_LOOK: Record<AssetState | 'overdue' | 'cleared', { tone: Stat
   overridden: { tone: 'caution', icon: 'tune-vertical', word: 'Overridden', meaning: 'Deliberately left in a non-normal state.' },
   normal: { tone: 'safe', icon: 'check-circle-outline', word: 'Normal', meaning: 'No live tags on this item.' },
   // Blue: someone must act — clear the tag or extend it with a reason.
-  overdue: { tone: 'mandatory', icon: 'clock-alert', word: 'Overdue', meaning: 'A live tag has passed its expiry. It stays in force until a person clears it.' },
+  overdue: { tone: 'mandatory', icon: 'clock-alert', word: 'Past expiry', meaning: 'A live tag has passed its expiry. It stays in force until a person clears it.' },
   cleared: { tone: 'neutral', icon: 'lock-open-check-outline', word: 'Cleared', meaning: 'No longer in force.' },
 };
 

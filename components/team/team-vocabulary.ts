@@ -26,3 +26,15 @@ export const AUDIT_EVENT_LABELS: Record<string, { word: string; icon: IconName }
   'site-access-change': { word: 'Site access changed', icon: 'office-building-cog-outline' },
   'password-reset': { word: 'Password link', icon: 'key-outline' },
 };
+
+/** Outbox e-mail kinds (server/mail/outbox.ts MAIL_KINDS) in plain words. */
+export const MAIL_KIND_LABELS: Record<string, string> = {
+  'tag-raised': 'Tag raised e-mail',
+  'tag-cleared': 'Tag cleared e-mail',
+  'tag-cleared-in-absence': 'Cleared-in-absence e-mail',
+  'my-tag-cleared-in-absence': 'Your-tag-cleared e-mail',
+  'my-tag-handed-over': 'Your-tag-taken-over e-mail',
+  digest: 'Morning digest',
+  invite: 'Invitation',
+  'password-reset': 'Password reset link',
+};

@@ -3,7 +3,7 @@ import { request } from '@/hooks/api/request';
 import { boardKeys } from '@/hooks/api/use-board';
 import { MAX_PAGE_SIZE } from '@/shared/rules/paging';
 import type { ChangeUserInput, InviteUserInput } from '@/shared/schemas/team';
-import type { TeamMember } from '@/shared/types/team';
+import type { TeamMember, UndeliveredMail } from '@/shared/types/team';
 import type { ListResponse } from '@/shared/types/api';
 
 /** One line of `GET /api/audit`, as server/services/users.service.ts answers it. */
@@ -21,6 +21,7 @@ export const teamKeys = {
   all: ['team'] as const,
   members: () => [...teamKeys.all, 'members'] as const,
   audit: (page: number, pageSize: number) => [...teamKeys.all, 'audit', page, pageSize] as const,
+  undelivered: () => [...teamKeys.all, 'undelivered-mail'] as const,
 };
 
 /** Everyone in the organisation: teams are tens of people, so one page of the largest size holds them. */
@@ -28,6 +29,16 @@ export function useTeamQuery(enabled = true) {
   return useQuery({
     queryKey: teamKeys.members(),
     queryFn: () => request<ListResponse<TeamMember>>(`/users?pageSize=${MAX_PAGE_SIZE}`),
+    staleTime: 60_000,
+    enabled,
+  });
+}
+
+/** E-mails the mail server refused for good (admins only). */
+export function useUndeliveredMailQuery(enabled = true) {
+  return useQuery({
+    queryKey: teamKeys.undelivered(),
+    queryFn: () => request<{ items: UndeliveredMail[]; total: number }>('/team/undelivered-mail'),
     staleTime: 60_000,
     enabled,
   });

@@ -6,6 +6,9 @@ import QRCode from 'qrcode';
 import { formatLabelCode } from '@/shared/rules/label-code';
 import type { LabelLayout } from '@/shared/schemas/queries';
 
+/** Printed on every label above its code. */
+export const LABEL_PURPOSE = 'Scan before work: live tags';
+
 export interface PlantLabel {
   code: string;
   url: string;
@@ -192,7 +195,10 @@ function drawLabel(doc: PDFKit.PDFDocument, label: PlantLabel, rect: LabelRect, 
   const blocks: TextBlock[] = [
     { font: 'Helvetica-Bold', size: 11, text: toPrintable(label.plantId), maxLines: 1 },
     { font: 'Helvetica', size: 8.5, text: toPrintable(label.name), maxLines: 2 },
-    { font: 'Helvetica', size: 8.5, text: toPrintable(label.site), maxLines: 2 },
+    // The 29 mm roll has room for the purpose line only with the site on one line.
+    { font: 'Helvetica', size: 8.5, text: toPrintable(label.site), maxLines: layout === 'roll' ? 1 : 2 },
+    // What the code is for, so someone who has never heard of the product knows why to scan it.
+    { font: 'Helvetica-Oblique', size: 6.5, text: LABEL_PURPOSE, maxLines: 1 },
     { font: 'Courier-Bold', size: codeSize, text: code, maxLines: 1 },
   ];
   const lead = 1.25;

@@ -1,5 +1,6 @@
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { clock } from '@/server/lib/clock';
+import type { UndeliveredMail } from '@/shared/types/team';
 
 /** Every e-mail Isoledger sends; the worker renders each kind from its payload (server/mail/templates.ts). */
 export const MAIL_KINDS = [
@@ -64,4 +65,30 @@ export async function recipientsWanting(
      WHERE ${where.join(' AND ')} ORDER BY u.id`,
     { replacements, type: QueryTypes.SELECT, transaction: opts.transaction ?? undefined },
   );
+}
+
+/** E-mails of an organisation that were given up, newest first (admins see them on the team screen). */
+export async function undeliveredMail(sequelize: Sequelize, organisationId: number, limit = 50): Promise<{ items: UndeliveredMail[]; total: number }> {
+  const rows = await sequelize.query<{ id: number | string; kind: string; toEmail: string; createdAt: Date; givenUpAt: Date; attempts: number; lastError: string | null }>(
+    `SELECT id, kind, to_email AS toEmail, created_at AS createdAt, failed_at AS givenUpAt, attempts, last_error AS lastError
+     FROM outbox WHERE organisation_id = ? AND failed_at IS NOT NULL ORDER BY failed_at DESC, id DESC LIMIT ${Number(limit)}`,
+    { replacements: [organisationId], type: QueryTypes.SELECT },
+  );
+  const [{ n }] = await sequelize.query<{ n: number | bigint }>('SELECT COUNT(*) AS n FROM outbox WHERE organisation_id = ? AND failed_at IS NOT NULL', {
+    replacements: [organisationId],
+    type: QueryTypes.SELECT,
+  });
+  return {
+    items: rows.map((r) => ({ ...r, id: Number(r.id), createdAt: new Date(r.createdAt).toISOString(), givenUpAt: new Date(r.givenUpAt).toISOString() })),
+    total: Number(n),
+  };
+}
+
+/** Across the service: e-mails waiting to go, and e-mails given up (for /api/health). */
+export async function outboxCounts(sequelize: Sequelize): Promise<{ waiting: number; givenUp: number }> {
+  const [row] = await sequelize.query<{ waiting: number | bigint | null; givenUp: number | bigint | null }>(
+    'SELECT SUM(sent_at IS NULL AND failed_at IS NULL) AS waiting, SUM(failed_at IS NOT NULL) AS givenUp FROM outbox',
+    { type: QueryTypes.SELECT },
+  );
+  return { waiting: Number(row?.waiting ?? 0), givenUp: Number(row?.givenUp ?? 0) };
 }

@@ -78,7 +78,7 @@ function tagMail(kind: MailKind, p: TagPayload, url: (path: string) => string): 
 function digestMail(p: DigestPayload, url: (path: string) => string): RenderedMail {
   const line = (r: DigestRow) => ({ text: `${r.siteName} · ${r.plantId} ${r.assetName} · ${kindWord(r.kind)} · ${r.holderName} · expires ${formatInZone(r.expiresAt, p.timeZone)}`, url: url(`/tags/${r.id}`) });
   const blocks: Block[] = [{ p: `${p.recipientName}, these tags on your sites in ${p.timeZone} need attention today (${p.localDate}).` }];
-  if (p.overdue.length) blocks.push({ p: `Overdue (${p.overdue.length}):` }, { list: p.overdue.map(line) });
+  if (p.overdue.length) blocks.push({ p: `Past expiry (${p.overdue.length}):` }, { list: p.overdue.map(line) });
   if (p.dueToday.length) blocks.push({ p: `Due today (${p.dueToday.length}):` }, { list: p.dueToday.map(line) });
   const reviews = p.reviewsOverdue ?? [];
   if (reviews.length) {
@@ -88,7 +88,7 @@ function digestMail(p: DigestPayload, url: (path: string) => string): RenderedMa
   }
   blocks.push({ link: { label: 'Open the board', url: url('/board') } }, { caution: RECORD_ONLY });
   const reviewNote = reviews.length ? `, ${reviews.length} procedure review${reviews.length === 1 ? '' : 's'} overdue` : '';
-  return renderBlocks(`Tags for ${p.localDate}: ${p.overdue.length} overdue, ${p.dueToday.length} due today${reviewNote}`, blocks);
+  return renderBlocks(`Tags for ${p.localDate}: ${p.overdue.length} past expiry, ${p.dueToday.length} due today${reviewNote}`, blocks);
 }
 
 function linkMail(kind: 'invite' | 'password-reset', p: LinkPayload, url: (path: string) => string): RenderedMail {

@@ -1,8 +1,9 @@
-import type { Transaction } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { AuthUser } from '@/server/middleware/auth';
 import { Organisation } from '@/server/models/organisation.model';
+import { User } from '@/server/models/user.model';
 import type { Visit } from '@/server/models/visit.model';
-import { enqueueMail, recipientsWanting, type OutboxMail } from '@/server/mail/outbox';
+import { enqueueMail, type OutboxMail } from '@/server/mail/outbox';
 import { formatInZone, renderBlocks, type Block, type RenderedMail } from '@/server/mail/render';
 import { ROLE_PERMISSIONS } from '@/shared/rules/permissions';
 import { TAG_EVENT_LABELS } from '@/shared/rules/tags';
@@ -19,13 +20,16 @@ export interface VisitMailPayload {
 }
 
 /**
- * Queues the end-of-visit summary in the transaction that ends the visit: to supervisors and admins who take
- * summary e-mails, and to the site's client contact when the organisation has turned that on.
+ * Queues the end-of-visit summary in the transaction that ends the visit: to supervisors and admins, and to the site's client contact when the organisation has turned that on.
  */
 export async function enqueueVisitMail(visit: Visit, summary: VisitDto, actor: AuthUser, transaction: Transaction): Promise<void> {
   const sequelize = visit.sequelize;
   const mails: OutboxMail[] = [];
-  const people = await recipientsWanting(sequelize, visit.organisationId, 'digest', { roles: [...ROLE_PERMISSIONS.superviseVisits], transaction });
+  // Every supervisor and admin: the summary is the record they answer for, so no e-mail setting turns it off.
+  const people = await User.findAll({
+    where: { organisationId: visit.organisationId, active: true, role: [...ROLE_PERMISSIONS.superviseVisits], passwordHash: { [Op.ne]: null } },
+    order: [['id', 'ASC']], transaction,
+  });
   for (const p of people) {
     if (p.id === actor.id) continue;
     mails.push({ organisationId: visit.organisationId, kind: 'visit-summary', toEmail: p.email, toUserId: p.id, payload: { visit: summary, recipientName: p.name, forClient: false } });

@@ -4,6 +4,7 @@ import { may, type RolePermission } from '@/shared/rules/permissions';
 import type { Role } from '@/shared/rules/roles';
 import { HttpError, forbidden } from '@/server/lib/http-error';
 import { User } from '@/server/models/user.model';
+import { grantedSiteIds } from '@/server/services/site-access.service';
 
 export interface AuthUser {
   id: number;
@@ -11,6 +12,8 @@ export interface AuthUser {
   role: Role;
   name: string;
   email: string;
+  /** The sites given to a user who does not see every site (a viewer); read once per request by `auth`. */
+  siteIds?: number[];
 }
 
 declare module 'express-serve-static-core' {
@@ -48,7 +51,8 @@ export const auth =
       if (!user || !user.active || user.tokenVersion !== claims.ver || user.organisationId !== claims.org) {
         throw unauthenticated('Your session has ended. Please sign in again.');
       }
-      req.user = { id: user.id, organisationId: user.organisationId, role: user.role, name: user.name, email: user.email };
+      const siteIds = may(user, 'seeEverySite') ? undefined : await grantedSiteIds(user.id);
+      req.user = { id: user.id, organisationId: user.organisationId, role: user.role, name: user.name, email: user.email, siteIds };
       next();
     } catch (err) {
       next(err);

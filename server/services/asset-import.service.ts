@@ -13,6 +13,7 @@ import { assetAsInput, assetColumns, sameAsStored, validateAsset, type ValidAsse
 import { ASSET_TYPES, ASSET_TYPE_LABELS, type AssetType } from '@/shared/rules/register';
 import { attributeSchemas } from '@/shared/schemas/register';
 import type { ImportResult, ImportRowError } from '@/shared/types/register';
+import { siteWhere } from '@/server/services/site-access.service';
 
 const key = (s: string) => s.trim().toLowerCase();
 registerExportOnlyColumns(READING_EXPORT_COLUMNS.map((c) => c.header));
@@ -24,6 +25,7 @@ export async function exportRegisterCsv(actor: AuthUser, filters: Pick<AssetList
     where: {
       organisationId: actor.organisationId,
       archivedAt: null,
+      ...siteWhere(actor),
       ...(filters.siteId ? { siteId: filters.siteId } : {}),
       ...(filters.plantRoomId ? { plantRoomId: filters.plantRoomId } : {}),
       ...(filters.type ? { type: filters.type } : {}),

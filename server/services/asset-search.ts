@@ -42,7 +42,7 @@ const ORDER: Record<AssetSort, string> = {
  *   types whose name matches what was typed (index on (organisation_id, type, plant_id)).
  * The union is materialised once as a derived table, then joined for the filters, order and page.
  */
-export function buildAssetListSql(organisationId: number, f: AssetListFilters, paging: { pageSize: number; offset: number }) {
+export function buildAssetListSql(organisationId: number, f: AssetListFilters, paging: { pageSize: number; offset: number }, siteIds: number[] | null = null) {
   const r: Record<string, unknown> = { org: organisationId, limit: paging.pageSize, offset: paging.offset };
   let from = 'assets a';
   if (f.q) {
@@ -71,6 +71,8 @@ export function buildAssetListSql(organisationId: number, f: AssetListFilters, p
   }
   const where = ['a.organisation_id = :org'];
   if (!f.includeArchived) where.push('a.archived_at IS NULL');
+  // The sites the reader may see (visibleSiteIds in site-access.service): null is every site of the organisation.
+  if (siteIds) { where.push(siteIds.length ? 'a.site_id IN (:visibleSites)' : '1 = 0'); r.visibleSites = siteIds; }
   if (f.siteId) { where.push('a.site_id = :siteId'); r.siteId = f.siteId; }
   if (f.plantRoomId) { where.push('a.plant_room_id = :plantRoomId'); r.plantRoomId = f.plantRoomId; }
   if (f.type) { where.push('a.type = :type'); r.type = f.type; }

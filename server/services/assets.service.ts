@@ -16,6 +16,7 @@ import { assertCanEdit, plantRoomForField, siteForField } from '@/server/service
 import { toAssetDto } from '@/server/services/register-dto';
 import type { Asset as AssetDto } from '@/shared/types/register';
 import type { ListResponse } from '@/shared/types/api';
+import { siteWhere, visibleSiteIds } from '@/server/services/site-access.service';
 
 type Paging = { page: number; pageSize: number; offset: number };
 
@@ -48,7 +49,7 @@ export async function loadAssetDtos(ids: number[], opts: { photos: boolean }): P
 }
 
 export async function listAssets(actor: AuthUser, filters: AssetListFilters, paging: Paging): Promise<ListResponse<AssetDto>> {
-  const sql = buildAssetListSql(actor.organisationId, filters, paging);
+  const sql = buildAssetListSql(actor.organisationId, filters, paging, visibleSiteIds(actor));
   const sequelize = Asset.sequelize!;
   const [ids, count] = await Promise.all([
     sequelize.query<{ id: number }>(sql.idsSql, { replacements: sql.replacements, type: QueryTypes.SELECT }),
@@ -59,7 +60,7 @@ export async function listAssets(actor: AuthUser, filters: AssetListFilters, pag
 }
 
 async function findAsset(actor: AuthUser, id: number, transaction?: Transaction): Promise<Asset> {
-  const asset = await Asset.findOne({ where: { id, organisationId: actor.organisationId }, transaction });
+  const asset = await Asset.findOne({ where: { id, organisationId: actor.organisationId, ...siteWhere(actor) }, transaction });
   if (!asset) throw notFound('Plant item');
   return asset;
 }

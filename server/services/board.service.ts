@@ -82,7 +82,7 @@ function toRow(r: RawRow, scope: Scope): BoardRow {
 
 async function scopeFor(actor: AuthUser): Promise<Scope> {
   ensurePermission(actor, 'viewBoard', 'The board is for supervisors, admins and viewers.');
-  return { organisationId: actor.organisationId, siteIds: await visibleSiteIds(actor), now: clock.now() };
+  return { organisationId: actor.organisationId, siteIds: visibleSiteIds(actor), now: clock.now() };
 }
 
 async function selectRows(sequelize: Sequelize, scope: Scope, f: BoardFilters, limit: number, offset: number): Promise<BoardRow[]> {

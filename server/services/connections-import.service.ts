@@ -11,6 +11,7 @@ import { checkLink, insertConnection } from '@/server/services/connections.servi
 import { MEDIA, MEDIUM_LABELS, type Medium } from '@/shared/rules/connections';
 import type { ConnectionImportResult } from '@/shared/types/connections';
 import type { ImportRowError } from '@/shared/types/register';
+import { siteWhere } from '@/server/services/site-access.service';
 
 /*
  * Connections as CSV, one row per link; export and import use the same columns, so an exported file imports back
@@ -28,7 +29,7 @@ const MEDIUM_LOOKUP = new Map<string, Medium>(MEDIA.flatMap((m) => [[squash(m), 
 
 export async function exportConnectionsCsv(actor: AuthUser, siteId: number | null): Promise<string> {
   const rows = await Connection.findAll({
-    where: { organisationId: actor.organisationId, ...(siteId ? { siteId } : {}) },
+    where: { organisationId: actor.organisationId, ...siteWhere(actor), ...(siteId ? { siteId } : {}) },
     include: [{ model: Asset, as: 'fromAsset', attributes: ['plantId'] }, { model: Asset, as: 'toAsset', attributes: ['plantId'] }],
     order: [['siteId', 'ASC'], ['id', 'ASC']],
   });

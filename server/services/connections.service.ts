@@ -9,6 +9,7 @@ import { MEDIUM_LABELS, canCarry, type Medium } from '@/shared/rules/connections
 import { ASSET_TYPE_LABELS } from '@/shared/rules/register';
 import type { ConnectionInput } from '@/shared/schemas/connections';
 import type { AssetConnections, Connection as ConnectionDto, ItemRef } from '@/shared/types/connections';
+import { siteWhere } from '@/server/services/site-access.service';
 
 const ITEM_ATTRIBUTES = ['id', 'plantId', 'name', 'type', 'plantRoomId', 'siteId', 'organisationId', 'archivedAt', 'energySources', 'attributes'];
 const include = [
@@ -33,7 +34,7 @@ export function toConnectionDto(c: Connection): ConnectionDto {
 
 /** An item of the actor's organisation, or 404 (another organisation's item is answered like a missing one). */
 export async function findOwnAsset(actor: AuthUser, id: number, transaction?: Transaction): Promise<Asset> {
-  const asset = await Asset.findOne({ where: { id, organisationId: actor.organisationId }, transaction });
+  const asset = await Asset.findOne({ where: { id, organisationId: actor.organisationId, ...siteWhere(actor) }, transaction });
   if (!asset) throw notFound('Plant item');
   return asset;
 }

@@ -1,4 +1,5 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
+import { outboxCounts } from '@/server/mail/outbox';
 
 /** What the launcher of a private mariadbd knows about it (scripts/lib/mariadb.ts). */
 export interface LauncherStatus {
@@ -14,6 +15,8 @@ export interface Health {
   launcher?: LauncherStatus;
   /** Present on a Galera cluster: how many nodes this node sees, and its own state (Synced when serving). */
   cluster?: { size: number; state: string };
+  /** E-mails waiting in the outbox, and e-mails given up (refused for good; admins see them on the team screen). */
+  mail?: { waiting: number; givenUp: number };
 }
 
 const CHECK_MS = 3000;
@@ -37,10 +40,11 @@ export async function checkHealth(sequelize: Sequelize, launcher?: () => Launche
       ),
     );
     const status = Object.fromEntries(rows.map((r) => [r.name.toLowerCase(), r.value]));
+    const mail = await withinCheckTime(outboxCounts(sequelize));
     // A server without Galera reports a cluster size of 0 (or nothing at all).
-    if (!(Number(status.wsrep_cluster_size) > 0)) return { ok: true, db: 'up', ...extra };
+    if (!(Number(status.wsrep_cluster_size) > 0)) return { ok: true, db: 'up', ...extra, mail };
     const cluster = { size: Number(status.wsrep_cluster_size), state: status.wsrep_local_state_comment ?? 'unknown' };
-    return { ok: status.wsrep_ready === 'ON' && cluster.state === 'Synced', db: 'up', ...extra, cluster };
+    return { ok: status.wsrep_ready === 'ON' && cluster.state === 'Synced', db: 'up', ...extra, cluster, mail };
   } catch {
     return { ok: false, db: 'down', ...extra };
   }

@@ -10,6 +10,7 @@ import { PlantRoom } from '@/server/models/plant-room.model';
 import { RetiredLabel } from '@/server/models/retired-label.model';
 import { Site } from '@/server/models/site.model';
 import { labelUrl, normaliseLabelCode } from '@/shared/rules/label-code';
+import { siteWhere } from '@/server/services/site-access.service';
 import type { LabelLayout } from '@/shared/schemas/queries';
 
 export const MAX_LABELS_PER_PDF = 500;
@@ -17,7 +18,7 @@ export const MAX_LABELS_PER_PDF = 500;
 /** The id of the item a label code belongs to; a malformed, retired or foreign code is "no such label" (404). */
 export async function assetIdForLabel(actor: AuthUser, raw: string): Promise<number> {
   const code = normaliseLabelCode(raw);
-  const asset = code ? await Asset.findOne({ attributes: ['id'], where: { labelCode: code, organisationId: actor.organisationId } }) : null;
+  const asset = code ? await Asset.findOne({ attributes: ['id'], where: { labelCode: code, organisationId: actor.organisationId, ...siteWhere(actor) } }) : null;
   if (!asset) throw new HttpError(404, 'no-such-label', 'No such label.');
   return asset.id;
 }
@@ -58,7 +59,7 @@ export interface LabelSelection {
 
 /** A PDF of labels for the chosen items (archived items excluded), ordered by site, plant room and plant ID. */
 export async function labelsPdf(actor: AuthUser, selection: LabelSelection, layout: LabelLayout, publicUrl: string): Promise<Buffer> {
-  const where: WhereOptions<Asset> = { organisationId: actor.organisationId, archivedAt: null };
+  const where: WhereOptions<Asset> = { organisationId: actor.organisationId, archivedAt: null, ...siteWhere(actor) };
   if (selection.assetIds?.length) Object.assign(where, { id: { [Op.in]: selection.assetIds } });
   else if (selection.plantRoomId) Object.assign(where, { plantRoomId: selection.plantRoomId });
   else if (selection.siteId) Object.assign(where, { siteId: selection.siteId });

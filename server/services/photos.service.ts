@@ -6,10 +6,13 @@ import { processPhoto } from '@/server/lib/photo-processing';
 import type { AuthUser } from '@/server/middleware/auth';
 import { Asset } from '@/server/models/asset.model';
 import { Photo } from '@/server/models/photo.model';
+import { PlantRoom } from '@/server/models/plant-room.model';
+import { Tag } from '@/server/models/tag.model';
 import { User } from '@/server/models/user.model';
 import { toPhotoDto } from '@/server/services/register-dto';
 import { findPlantRoom } from '@/server/services/register-access';
 import type { Photo as PhotoDto } from '@/shared/types/register';
+import { seesSite, siteWhere, visibleSiteIds } from '@/server/services/site-access.service';
 
 const withCreator = { model: User, as: 'creator', attributes: ['id', 'name'] };
 
@@ -53,7 +56,7 @@ export async function addPhoto(
 ): Promise<PhotoDto> {
   const caption = readCaption(rawCaption);
   if ('assetId' in owner) {
-    const asset = await Asset.findOne({ where: { id: owner.assetId, organisationId: actor.organisationId } });
+    const asset = await Asset.findOne({ where: { id: owner.assetId, organisationId: actor.organisationId, ...siteWhere(actor) } });
     if (!asset) throw notFound('Plant item');
     if (asset.archivedAt) throw conflict('This item is archived; it takes no new photos.');
   } else {
@@ -93,10 +96,18 @@ export async function storePhoto(
   );
 }
 
+/** The site a photo belongs to, through its item, plant room or tag. */
+async function photoSiteId(photo: Photo): Promise<number | null> {
+  const assetId = photo.assetId ?? (photo.tagId ? (await Tag.findByPk(photo.tagId, { attributes: ['assetId'] }))?.assetId : null);
+  if (assetId) return (await Asset.findByPk(assetId, { attributes: ['siteId'] }))?.siteId ?? null;
+  if (photo.plantRoomId) return (await PlantRoom.findByPk(photo.plantRoomId, { attributes: ['siteId'] }))?.siteId ?? null;
+  return null;
+}
+
 /** The JPEG bytes of a photo or its thumbnail; another organisation's photo is a 404 like a missing one. */
 export async function readPhotoFile(actor: AuthUser, storage: PhotoStorage, id: number, variant: 'full' | 'thumbnail'): Promise<Buffer> {
   const photo = await Photo.findOne({ where: { id, organisationId: actor.organisationId } });
-  if (!photo) throw notFound('Photo');
+  if (!photo || (visibleSiteIds(actor) !== null && !seesSite(actor, await photoSiteId(photo)))) throw notFound('Photo');
   try {
     return await storage.get(variant === 'full' ? photo.storageKey : photo.thumbnailKey);
   } catch (err) {

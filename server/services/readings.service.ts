@@ -14,6 +14,7 @@ import { resolveCheckSettings, runReadingChecks } from '@/shared/rules/readings'
 import type { ReadingCorrectionInput, ReadingSetInput } from '@/shared/schemas/readings';
 import type { ReadingList, ReadingSet, ReadingValues } from '@/shared/types/readings';
 import type { CheckFlagLevel } from '@/shared/calc';
+import { siteWhere } from '@/server/services/site-access.service';
 
 type Paging = { page: number; pageSize: number; offset: number };
 
@@ -26,7 +27,7 @@ export const readingIncludes = (): Includeable[] => [
 
 /** Another organisation's item is answered exactly like a missing one. */
 async function findAsset(actor: AuthUser, id: number): Promise<Asset> {
-  const asset = await Asset.findOne({ where: { id, organisationId: actor.organisationId } });
+  const asset = await Asset.findOne({ where: { id, organisationId: actor.organisationId, ...siteWhere(actor) } });
   if (!asset) throw notFound('Item');
   return asset;
 }
@@ -103,7 +104,7 @@ export async function logReadings(actor: AuthUser, assetId: number, input: Readi
 /** Appends a correction by the original's author; the original is kept and marked superseded. */
 export async function correctReading(actor: AuthUser, readingId: number, input: ReadingCorrectionInput): Promise<ReadingSet> {
   const original = await Reading.findByPk(readingId, { include: [{ model: Reading, as: 'correction', attributes: ['id'] }] });
-  const asset = original ? await Asset.findOne({ where: { id: original.assetId, organisationId: actor.organisationId } }) : null;
+  const asset = original ? await Asset.findOne({ where: { id: original.assetId, organisationId: actor.organisationId, ...siteWhere(actor) } }) : null;
   if (!original || !asset) throw notFound('Reading set');
   if (original.createdBy !== actor.id) throw forbidden('Only the engineer who logged a set can correct it.');
   if (original.correction) throw conflict(`This set has already been corrected (set ${original.correction.id}); correct the latest version instead.`);

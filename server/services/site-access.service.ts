@@ -1,15 +1,51 @@
-import type { Transaction } from 'sequelize';
+import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import type { AuthUser } from '@/server/middleware/auth';
 import { UserSiteAccess } from '@/server/models/user-site-access.model';
+import { may } from '@/shared/rules/permissions';
+
+/*
+ * A viewer's site limits, in one place. The auth middleware reads the sites given to a viewer once per request
+ * (grantedSiteIds) and every read of sites, plant rooms, items, tags, readings, photos, labels, exports and the
+ * board filters through the functions below, so one rule decides what a viewer can see everywhere.
+ */
+
+/** The sites an admin has given a user (what a viewer may see), for the auth middleware. */
+export async function grantedSiteIds(userId: number, transaction?: Transaction): Promise<number[]> {
+  const rows = await UserSiteAccess.findAll({ attributes: ['siteId'], where: { userId }, transaction });
+  return rows.map((r) => r.siteId);
+}
 
 /**
- * The sites a user may see: null means every site of their organisation (admins, supervisors, engineers);
- * a viewer sees only the sites an admin has given them, and none until then.
+ * The sites a user may see: null means every site of their organisation (admins, supervisors, engineers:
+ * permission `seeEverySite`); anyone else sees only the sites given to them, and none until then (or when the
+ * actor was built without its sites: the rule fails closed).
  */
-export async function visibleSiteIds(actor: Pick<AuthUser, 'id' | 'role'>, transaction?: Transaction): Promise<number[] | null> {
-  if (actor.role !== 'viewer') return null;
-  const rows = await UserSiteAccess.findAll({ attributes: ['siteId'], where: { userId: actor.id }, transaction });
-  return rows.map((r) => r.siteId);
+export function visibleSiteIds(actor: Pick<AuthUser, 'role' | 'siteIds'>): number[] | null {
+  if (may(actor, 'seeEverySite')) return null;
+  return actor.siteIds ?? [];
+}
+
+/** May this actor see a record on this site? */
+export function seesSite(actor: Pick<AuthUser, 'role' | 'siteIds'>, siteId: number | null | undefined): boolean {
+  const ids = visibleSiteIds(actor);
+  return ids === null || (siteId != null && ids.includes(siteId));
+}
+
+/**
+ * A Sequelize condition on a site column (`siteId`, or `id` for sites themselves) to spread into a `where`; empty
+ * for those who see every site. It sits under Op.and, so a filter on the same column (`siteId: 3`) narrows it and
+ * never replaces it.
+ */
+export function siteWhere(actor: Pick<AuthUser, 'role' | 'siteIds'>, column = 'siteId'): WhereOptions {
+  const ids = visibleSiteIds(actor);
+  return ids === null ? {} : { [Op.and]: [{ [column]: { [Op.in]: ids.length ? ids : [0] } }] };
+}
+
+/** The same condition for raw SQL with positional `?` replacements: `AND <column> IN (?)`, or nothing. */
+export function siteSql(actor: Pick<AuthUser, 'role' | 'siteIds'>, column: string): { sql: string; values: unknown[] } {
+  const ids = visibleSiteIds(actor);
+  if (ids === null) return { sql: '', values: [] };
+  return ids.length ? { sql: ` AND ${column} IN (?)`, values: [ids] } : { sql: ' AND 1 = 0', values: [] };
 }
 
 /** Site ids per user, for lists of people. */

@@ -10,12 +10,13 @@ import type { SiteInput } from '@/shared/schemas/register';
 import { isValidTimeZone } from '@/shared/rules/time-zone';
 import type { Site as SiteDto } from '@/shared/types/register';
 import type { ListResponse } from '@/shared/types/api';
+import { siteWhere } from '@/server/services/site-access.service';
 
 type Paging = { page: number; pageSize: number; offset: number };
 
 /** The zone as the IANA database spells it (`europe/london` → `Europe/London`), or a 422 naming the field. */
 function canonicalZone(timeZone: string): string {
-  if (!isValidTimeZone(timeZone)) throw unprocessable('Some fields need attention.', { timeZone: 'Unknown time zone; use an IANA name such as Europe/London.' });
+  if (!isValidTimeZone(timeZone)) throw unprocessable('Some fields need attention.', { timeZone: 'Unknown time zone; give a region and city such as Europe/London.' });
   return new Intl.DateTimeFormat('en-GB', { timeZone }).resolvedOptions().timeZone;
 }
 
@@ -45,7 +46,7 @@ async function dto(site: Site) {
 
 export async function listSites(actor: AuthUser, paging: Paging): Promise<ListResponse<SiteDto>> {
   const { rows, count } = await Site.findAndCountAll({
-    where: { organisationId: actor.organisationId },
+    where: { organisationId: actor.organisationId, ...siteWhere(actor, 'id') },
     order: [['name', 'ASC'], ['id', 'ASC']],
     limit: paging.pageSize,
     offset: paging.offset,

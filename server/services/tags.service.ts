@@ -21,16 +21,17 @@ import { sourcesNotAccounted } from '@/shared/rules/tag-isolation';
 import type { ProofInput, RaiseTagInput } from '@/shared/schemas/tags';
 import type { ListResponse } from '@/shared/types/user';
 import type { Tag as TagDto } from '@/shared/types/tags';
+import { seesSite, siteWhere } from '@/server/services/site-access.service';
 
 async function findAsset(actor: AuthUser, assetId: number, transaction?: Transaction) {
-  const asset = Number.isSafeInteger(assetId) ? await Asset.findOne({ where: { id: assetId, organisationId: actor.organisationId }, transaction }) : null;
+  const asset = Number.isSafeInteger(assetId) ? await Asset.findOne({ where: { id: assetId, organisationId: actor.organisationId, ...siteWhere(actor) }, transaction }) : null;
   if (!asset) throw notFound('Plant item');
   return asset;
 }
 
 export async function getTag(actor: AuthUser, id: number): Promise<TagDto> {
   const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId }, include: tagInclude }) : null;
-  if (!tag) throw notFound('Tag');
+  if (!tag || !seesSite(actor, (tag as Tag & { asset?: Asset }).asset?.siteId)) throw notFound('Tag');
   const photos = (await photosOf('tagId', [tag.id])).get(tag.id) ?? [];
   return { ...toTagDto(tag, await loadEvents(tag.id)), photoCount: photos.length, photos: photos.map(toPhotoDto) };
 }
@@ -150,7 +151,9 @@ export async function listTags(actor: AuthUser, filters: TagFilters, paging: { p
   if (filters.kind === 'isolation' || filters.kind === 'override') Object.assign(where, { kind: filters.kind });
   if (filters.assetId) Object.assign(where, { assetId: filters.assetId });
   if (filters.offeredToMe) Object.assign(where, { status: 'live', offerToId: actor.id, offerLapsesAt: { [Op.gt]: clock.now() } });
-  const include = tagInclude.map((inc) => (inc.as === 'asset' && filters.siteId ? { ...inc, where: { siteId: filters.siteId }, required: true } : inc));
+  const assetWhere = { ...(filters.siteId ? { siteId: filters.siteId } : {}), ...siteWhere(actor) };
+  const narrowed = Reflect.ownKeys(assetWhere).length > 0;
+  const include = tagInclude.map((inc) => (inc.as === 'asset' && narrowed ? { ...inc, where: assetWhere, required: true } : inc));
   const { rows, count } = await Tag.findAndCountAll({ where, include, order: [['status', 'DESC'], ['raisedAt', 'DESC']], limit: paging.pageSize, offset: paging.offset, distinct: true });
   const photos = await photosOf('tagId', rows.map((t) => t.id));
   return { items: rows.map((t) => ({ ...toTagDto(t), photoCount: photos.get(t.id)?.length ?? 0 })), total: count, page: paging.page, pageSize: paging.pageSize };

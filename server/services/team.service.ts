@@ -27,6 +27,8 @@ async function findMember(actor: AuthUser, id: number, transaction: Transaction)
   return user;
 }
 
+const EMAIL_UNAVAILABLE = 'This address cannot be invited. If the person is not in your team list, ask them for another address.';
+
 /** Adds a person with no password and e-mails them a 7-day one-time link to choose one. */
 export async function inviteUser(sequelize: Sequelize, actor: AuthUser, input: InviteUserInput, ip: string | null): Promise<TeamMember> {
   try {
@@ -37,8 +39,9 @@ export async function inviteUser(sequelize: Sequelize, actor: AuthUser, input: I
       return toTeamMember(user, []);
     });
   } catch (err) {
-    // Addresses are unique across the whole service; say only that this one cannot be used.
-    if (err instanceof UniqueConstraintError) throw new HttpError(409, 'email-taken', 'That e-mail address already has an account.', { email: 'That e-mail address already has an account.' });
+    // Addresses are unique across the whole service. One answer whether the address is on this team or held by
+    // another organisation, and it never says "has an account": the team list shows who is here already.
+    if (err instanceof UniqueConstraintError) throw new HttpError(409, 'email-taken', EMAIL_UNAVAILABLE, { email: EMAIL_UNAVAILABLE });
     throw err;
   }
 }

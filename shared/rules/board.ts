@@ -29,7 +29,7 @@ export function boardStateSql(state: BoardState, column: string, now: Date): { s
 }
 
 export const BOARD_STATE_LABELS: Record<BoardState, string> = {
-  overdue: 'Overdue',
+  overdue: 'Past expiry',
   'due-soon': 'Due within 24 h',
   live: 'Live',
 };

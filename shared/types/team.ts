@@ -34,3 +34,16 @@ export interface ResetRequestResponse {
 export interface SetPasswordResponse {
   email: string;
 }
+
+/** An e-mail the outbox gave up on (the mail server refused it for good), as the team screen lists them for admins. */
+export interface UndeliveredMail {
+  id: number;
+  /** The kind of e-mail (server/mail/outbox.ts MAIL_KINDS): invite, password-reset, tag-raised, … */
+  kind: string;
+  toEmail: string;
+  createdAt: string;
+  givenUpAt: string;
+  attempts: number;
+  /** What the mail server last said. */
+  lastError: string | null;
+}

@@ -115,7 +115,7 @@ describe('supervisor board', () => {
     await w.page.getByTestId(`count-site-${site.siteId}`).click();
     await w.page.getByText(`${site.total} ${site.total === 1 ? 'tag' : 'tags'}`, { exact: true }).waitFor();
     const overdue = all.items.find((r) => r.state === 'overdue' && r.siteId === site.siteId);
-    if (overdue) await w.page.getByTestId(`board-row-${overdue.id}`).getByText('Overdue', { exact: true }).waitFor();
+    if (overdue) await w.page.getByTestId(`board-row-${overdue.id}`).getByText('Past expiry', { exact: true }).waitFor();
     await screenshot(w.page, 'board-site-390');
     // Nothing wider than the phone's screen.
     expect(await w.page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PHONE.width);

@@ -6,6 +6,8 @@ import request from 'supertest';
 import { createApp } from '@/server/app';
 import { readConfig, type ServerConfig } from '@/server/config';
 import { Organisation } from '@/server/models/organisation.model';
+import { Site } from '@/server/models/site.model';
+import { UserSiteAccess } from '@/server/models/user-site-access.model';
 import { User } from '@/server/models/user.model';
 import type { Role } from '@/shared/rules/roles';
 import { createTestDatabase, type TestDatabase } from '@/test/setup/db';
@@ -57,4 +59,13 @@ export async function tokenFor(app: TestApp['app'], user: User): Promise<string>
   const res = await request(app).post('/api/auth/login').send({ email: user.email, password: TEST_PASSWORD });
   if (res.status !== 200) throw new Error(`sign-in failed for ${user.email}: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body.token as string;
+}
+
+/**
+ * Gives a viewer every site their organisation has at this moment (a viewer sees only the sites given to them),
+ * for tests where the viewer stands for any reader. Sites created later need another call.
+ */
+export async function giveViewerEverySite(viewer: User): Promise<void> {
+  const sites = await Site.findAll({ attributes: ['id'], where: { organisationId: viewer.organisationId } });
+  await UserSiteAccess.bulkCreate(sites.map((s) => ({ userId: viewer.id, siteId: s.id, grantedBy: null })), { ignoreDuplicates: true });
 }

@@ -5,6 +5,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { PNG } from 'pngjs';
 import {
+  LABEL_PURPOSE,
   LAYOUTS,
   MIN_MODULE_MM,
   PT_PER_MM,
@@ -195,6 +196,16 @@ describe('renderLabelsPdf', () => {
     const pdfPath = path.join(dir, 'accents.pdf');
     writeFileSync(pdfPath, await renderLabelsPdf([{ ...label, name: 'Kältemaschine – Ø 50' }], 'roll'));
     expect(pdfText(pdfPath, labelRects(1, 'roll')[0])).toContain('Kältemaschine – Ø 50');
+  });
+
+  it('says on every label, sheet and roll, what the code is for', async () => {
+    const [label] = makeLabels(1);
+    for (const layout of ['sheet', 'roll'] as const) {
+      const pdfPath = path.join(dir, `purpose-${layout}.pdf`);
+      writeFileSync(pdfPath, await renderLabelsPdf([label], layout));
+      // common practice, no published source: a code nobody knows the purpose of is not scanned.
+      expect(pdfText(pdfPath, labelRects(1, layout)[0]).replace(/\s+/g, ' ')).toContain(LABEL_PURPOSE);
+    }
   });
 
   it('prints a roll with one 62 mm label per page', async () => {

@@ -88,7 +88,7 @@ describe('runDigests', () => {
     expect(await env.worker.runOnce()).toEqual({ sent: 2, failed: 0 });
     const [mail] = await env.inbox.to(u.supervisor.email);
     expect((await env.inbox.to(u.supervisor.email)).length).toBe(1);
-    expect(mail.subject).toBe('Tags for 2025-01-15: 1 overdue, 1 due today');
+    expect(mail.subject).toBe('Tags for 2025-01-15: 1 past expiry, 1 due today');
     expect(mail.text).toContain(`${TEST_PUBLIC_URL}/tags/${ids.overdue}`);
     expect(mail.text).toContain(`${TEST_PUBLIC_URL}/tags/${ids.dueToday}`);
     expect(mail.text).not.toContain(`/tags/${ids.tomorrow}`);
@@ -108,7 +108,7 @@ describe('runDigests', () => {
     const mails = await env.inbox.to(u.admin.email);
     expect(mails).toHaveLength(1);
     // OSHA 29 CFR 1910.147(c)(6)(i): reviewed at least annually; the Tokyo site's last review (2023-12-01) is over 12 months old.
-    expect(mails[0].subject).toBe('Tags for 2025-01-16: 0 overdue, 1 due today, 1 procedure review overdue');
+    expect(mails[0].subject).toBe('Tags for 2025-01-16: 0 past expiry, 1 due today, 1 procedure review overdue');
     expect(mails[0].text).toContain('Hazel Annex · last review 2023-12-01');
     expect(mails[0].text).toContain(`${TEST_PUBLIC_URL}/tags/${ids.tokyoToday}`);
     expect(mails[0].text).toContain('Asia/Tokyo');

@@ -1,5 +1,5 @@
 import { parse } from 'csv-parse/sync';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { REGISTER_COLUMNS } from '@/server/lib/register-csv';
 import { READING_EXPORT_COLUMNS } from '@/server/services/readings-export';
 
@@ -7,7 +7,7 @@ import { READING_EXPORT_COLUMNS } from '@/server/services/readings-export';
 const EXPORT_COLUMNS = [...REGISTER_COLUMNS, ...READING_EXPORT_COLUMNS.map((c) => c.header)];
 import { Asset } from '@/server/models/asset.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
-import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
+import { createOrganisation, giveViewerEverySite, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
 import { as, assetBody, created, roomBody, siteBody, type Client } from '@/test/server/support/register';
 
 let t: TestApp;
@@ -34,6 +34,8 @@ beforeAll(async () => {
   await created(birch.post('/api/sites', siteBody('Birch Yard')));
 });
 afterAll(() => t.close());
+// The viewer here stands for any reader: it is given every site (site limits are tested in test/server/services/site-access.test.ts).
+beforeEach(() => giveViewerEverySite(alder.viewer));
 
 describe('POST /api/assets/import', () => {
   it('imports nothing from a file with bad rows and names every bad row, column and problem', async () => {

@@ -1,9 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeEach, beforeAll, describe, expect, it } from 'vitest';
 import { Asset } from '@/server/models/asset.model';
 import { isLabelCode } from '@/shared/rules/label-code';
 import { addMonths } from '@/shared/rules/register';
 import { localDate } from '@/shared/rules/time-zone';
-import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
+import { createOrganisation, giveViewerEverySite, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
 import { as, assetBody, created, roomBody, siteBody, type Client } from '@/test/server/support/register';
 
 let t: TestApp;
@@ -26,6 +26,8 @@ beforeAll(async () => {
   roomId = (await created(c.engineer.post('/api/plant-rooms', roomBody(siteId, 'Boiler house')))).id;
 });
 afterAll(() => t.close());
+// The viewer here stands for any reader: it is given every site (site limits are tested in test/server/services/site-access.test.ts).
+beforeEach(() => giveViewerEverySite(alder.viewer));
 
 describe('POST /api/assets', () => {
   it('creates an item with a label code, typed attributes and the next service date', async () => {

@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { Connection } from '@/server/models/connection.model';
-import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
+import { createOrganisation, giveViewerEverySite, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
 import { as, assetBody, created, roomBody, siteBody, type Client } from '@/test/server/support/register';
 
 let t: TestApp;
@@ -51,6 +51,8 @@ beforeAll(async () => {
   await link('ISO-02', 'B-02', 'electrical');
 });
 afterAll(() => t.close());
+// The viewer here stands for any reader: it is given every site (site limits are tested in test/server/services/site-access.test.ts).
+beforeEach(() => giveViewerEverySite(alder.viewer));
 
 const post = (client: Client, a: number, b: number, medium: string) => client.post('/api/connections', { fromAssetId: a, toAssetId: b, medium });
 

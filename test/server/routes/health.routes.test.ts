@@ -33,7 +33,7 @@ describe('GET /api/health', () => {
     try {
       const up = await request(app).get('/api/health');
       expect(up.status).toBe(200);
-      expect(up.body).toEqual({ ok: true, db: 'up' });
+      expect(up.body).toEqual({ ok: true, db: 'up', mail: { waiting: 0, givenUp: 0 } });
 
       await db.stop();
       const down = await request(app).get('/api/health');
@@ -45,7 +45,7 @@ describe('GET /api/health', () => {
       // The pool may hand out one stale connection first; it must recover on its own within a few checks.
       for (let i = 0; i < 5 && again.status !== 200; i++) again = await request(app).get('/api/health');
       expect(again.status).toBe(200);
-      expect(again.body).toEqual({ ok: true, db: 'up' });
+      expect(again.body).toEqual({ ok: true, db: 'up', mail: { waiting: 0, givenUp: 0 } });
     } finally {
       await sequelize.close();
     }

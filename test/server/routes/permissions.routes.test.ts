@@ -17,6 +17,8 @@ const GUARDED: { permission: RolePermission; method: 'get' | 'post' | 'patch' | 
   { permission: 'addToRegister', method: 'post', path: '/api/assets', body: {} },
   { permission: 'addToRegister', method: 'patch', path: `/api/assets/${NONE}`, body: { name: 'Renamed' } },
   { permission: 'archiveRecords', method: 'post', path: `/api/assets/${NONE}/archive` },
+  { permission: 'addToRegister', method: 'post', path: '/api/connections', body: {} },
+  { permission: 'importRegister', method: 'post', path: '/api/connections/import' },
   { permission: 'importRegister', method: 'post', path: '/api/assets/import' },
   { permission: 'replaceLabel', method: 'post', path: `/api/assets/${NONE}/label/replace` },
   { permission: 'recordReadings', method: 'post', path: `/api/assets/${NONE}/readings`, body: {} },

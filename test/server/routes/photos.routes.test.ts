@@ -2,10 +2,10 @@ import fs from 'node:fs';
 import path from 'node:path';
 import request from 'supertest';
 import sharp from 'sharp';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeEach, beforeAll, describe, expect, it } from 'vitest';
 import { Photo } from '@/server/models/photo.model';
 import { MAX_PHOTO_BYTES } from '@/server/lib/photo-processing';
-import { createOrganisation, setupTestApp, tokenFor, type TestApp } from '@/test/setup/app';
+import { createOrganisation, giveViewerEverySite, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
 import { exifGpsLatitude, jpegWithGps, pngClaiming } from '@/test/server/support/images';
 import { as, assetBody, created, roomBody, siteBody, type Client } from '@/test/server/support/register';
 
@@ -14,10 +14,11 @@ const c = {} as Record<'supervisor' | 'engineer' | 'engineer2' | 'viewer', Clien
 let birch: Client;
 let assetId: number;
 let roomId: number;
+let alder: OrgUsers;
 
 beforeAll(async () => {
   t = await setupTestApp();
-  const alder = (await createOrganisation('alder')).users;
+  alder = (await createOrganisation('alder')).users;
   for (const role of ['supervisor', 'engineer', 'engineer2', 'viewer'] as const) c[role] = as(t, await tokenFor(t.app, alder[role]));
   birch = as(t, await tokenFor(t.app, (await createOrganisation('birch')).users.admin));
   const site = await created(c.supervisor.post('/api/sites', siteBody('Hazel Offices')));
@@ -25,6 +26,8 @@ beforeAll(async () => {
   assetId = (await created(c.engineer.post('/api/assets', assetBody(site.id, 'P-01', { plantRoomId: roomId })))).id;
 });
 afterAll(() => t.close());
+// The viewer here stands for any reader: it is given every site (site limits are tested in test/server/services/site-access.test.ts).
+beforeEach(() => giveViewerEverySite(alder.viewer));
 
 const photoCount = () => Photo.count();
 const storedFile = (key: string) => fs.readFileSync(path.join(t.config.dataDir, 'photos', ...key.split('/')));

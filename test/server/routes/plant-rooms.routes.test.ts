@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeEach, beforeAll, describe, expect, it } from 'vitest';
 import { PlantRoom } from '@/server/models/plant-room.model';
-import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
+import { createOrganisation, giveViewerEverySite, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
 import { as, assetBody, created, roomBody, siteBody, type Client } from '@/test/server/support/register';
 
 let t: TestApp;
@@ -20,6 +20,8 @@ beforeAll(async () => {
   otherSiteId = (await created(c.admin.post('/api/sites', siteBody('Cedar Annexe')))).id;
 });
 afterAll(() => t.close());
+// The viewer here stands for any reader: it is given every site (site limits are tested in test/server/services/site-access.test.ts).
+beforeEach(() => giveViewerEverySite(alder.viewer));
 
 describe('POST /api/plant-rooms', () => {
   it('lets an engineer add a plant room with its safety locations', async () => {

@@ -1,5 +1,5 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeEach, beforeAll, describe, expect, it } from 'vitest';
 import { Asset } from '@/server/models/asset.model';
 import { Reading } from '@/server/models/reading.model';
 import { Site } from '@/server/models/site.model';
@@ -8,7 +8,7 @@ import { barToPa, litresPerSecondToM3PerS, SAFETY_VALVE_DANGER_TEXT } from '@/sh
 import { generateLabelCode } from '@/shared/rules/label-code';
 import type { AssetType } from '@/shared/rules/register';
 import type { ReadingSet } from '@/shared/types/readings';
-import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
+import { createOrganisation, giveViewerEverySite, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
 
 let t: TestApp;
 let u: OrgUsers;
@@ -51,6 +51,8 @@ beforeAll(async () => {
   tok.birch = await tokenFor(t.app, birch.engineer);
 });
 afterAll(() => t.close());
+// The viewer here stands for any reader: it is given every site (site limits are tested in test/server/services/site-access.test.ts).
+beforeEach(() => giveViewerEverySite(u.viewer));
 
 const as = (who: string) => ({
   get: (path: string) => request(t.app).get(path).set('Authorization', `Bearer ${tok[who]}`),

@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeEach, beforeAll, describe, expect, it } from 'vitest';
 import { Site } from '@/server/models/site.model';
-import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
+import { createOrganisation, giveViewerEverySite, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
 import { as, created, roomBody, siteBody, type Client } from '@/test/server/support/register';
 
 let t: TestApp;
@@ -16,6 +16,8 @@ beforeAll(async () => {
   birchAdmin = as(t, await tokenFor(t.app, birch.admin));
 });
 afterAll(() => t.close());
+// The viewer here stands for any reader: it is given every site (site limits are tested in test/server/services/site-access.test.ts).
+beforeEach(() => giveViewerEverySite(alder.viewer));
 
 describe('POST /api/sites', () => {
   it('creates a site for a supervisor, with the time zone in its IANA spelling', async () => {
@@ -58,6 +60,7 @@ describe('GET /api/sites', () => {
   it('lists the organisation’s sites by name, paged, with counts, and caps the page size at 200', async () => {
     const site = await created(c.admin.post('/api/sites', siteBody('Aardvark Hall')));
     await created(c.engineer.post('/api/plant-rooms', roomBody(site.id, 'Plant room 1')));
+    await giveViewerEverySite(alder.viewer);
     const page = await c.viewer.get('/api/sites?pageSize=1&page=1');
     expect(page.status).toBe(200);
     expect(page.body).toMatchObject({ page: 1, pageSize: 1 });

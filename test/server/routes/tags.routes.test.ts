@@ -1,10 +1,10 @@
 import request from 'supertest';
 import sharp from 'sharp';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeEach, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { clock } from '@/server/lib/clock';
 import { Tag } from '@/server/models/tag.model';
 import { TagEvent } from '@/server/models/tag-event.model';
-import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
+import { createOrganisation, giveViewerEverySite, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
 import { createSiteWithAssets } from '@/test/setup/register-fixtures';
 
 let t: TestApp;
@@ -25,6 +25,8 @@ beforeAll(async () => {
   tok.birch = await tokenFor(t.app, other.supervisor);
 });
 afterAll(() => t.close());
+// The viewer here stands for any reader: it is given every site (site limits are tested in test/server/services/site-access.test.ts).
+beforeEach(() => giveViewerEverySite(u.viewer));
 afterEach(() => { clock.now = () => new Date(); });
 
 const as = (who: string) => ({
@@ -267,6 +269,7 @@ describe('state, overdue and history', () => {
 describe('item state in the register', () => {
   it('shows isolated with the count, the live tags, and "isolation point for" on the point item', async () => {
     const fresh = await createSiteWithAssets(u.admin.organisationId, u.admin.id, { name: 'State Site' });
+    await giveViewerEverySite(u.viewer);
     const body = isolation({ points: [{ assetId: fresh.valve.id, method: 'valve-locked' }] });
     await raise('engineer', body, fresh.pump.id);
     await raise('engineer2', body, fresh.pump.id);

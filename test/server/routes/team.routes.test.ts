@@ -91,6 +91,10 @@ describe('POST /api/users/invite', () => {
     const taken = await as('admin').post('/api/users/invite', { name: 'Someone', email: other.engineer.email, role: 'engineer' });
     expect(taken.status).toBe(409);
     expect(taken.body.error.fields).toHaveProperty('email');
+    // Another organisation's address is answered exactly as an address already on this team, and never "has an account".
+    const ours = await as('admin').post('/api/users/invite', { name: 'Someone', email: u.engineer.email, role: 'engineer' });
+    expect([ours.status, ours.body]).toEqual([taken.status, taken.body]);
+    expect(JSON.stringify(taken.body)).not.toMatch(/account/i);
     const bad = await as('admin').post('/api/users/invite', { name: '', email: 'not-an-address', role: 'boss' });
     expect(bad.status).toBe(422);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(['email', 'name', 'role']);

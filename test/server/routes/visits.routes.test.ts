@@ -3,13 +3,14 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { Organisation } from '@/server/models/organisation.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { Visit } from '@/server/models/visit.model';
 import { VisitDecision } from '@/server/models/visit-decision.model';
 import { TagEvent } from '@/server/models/tag-event.model';
 import { Tag } from '@/server/models/tag.model';
-import { createOrganisation, tokenFor, type OrgUsers } from '@/test/setup/app';
+import { createOrganisation, giveViewerEverySite, tokenFor, type OrgUsers } from '@/test/setup/app';
 import { createSiteWithAssets } from '@/test/setup/register-fixtures';
 import { outboxRows, setupMailTestApp } from '@/test/server/support/mail-test-app';
 
@@ -33,6 +34,8 @@ beforeAll(async () => {
   tok.larch = await tokenFor(env.t.app, other.users.supervisor);
 });
 afterAll(() => env.close());
+// The viewer here stands for any reader: it is given every site (site limits are tested in test/server/services/site-access.test.ts).
+beforeEach(() => giveViewerEverySite(u.viewer));
 
 const as = (who: string) => ({
   get: (p: string) => request(env.t.app).get(p).set('Authorization', `Bearer ${tok[who]}`),
@@ -232,5 +235,22 @@ describe('GET /api/sites/:id/since-my-last-visit', () => {
     const never = await as('supervisor').get(`/api/sites/${plant.site.id}/since-my-last-visit`);
     expect(never.body).toMatchObject({ since: null, raised: [] });
     expect((await as('larch').get(`/api/sites/${plant.site.id}/since-my-last-visit`)).status).toBe(404);
+  });
+});
+
+describe('end-of-visit summary to the site’s client contact', () => {
+  it('goes to the client contact only once the organisation turns it on', async () => {
+    await plant.site.update({ clientContactEmail: 'estates@hazel-primary.test', clientContactName: 'Estates office' });
+    const open = await as('engineer2').get('/api/me/visit');
+    const held = await as('engineer2').get('/api/me/tags');
+    const decisions = held.body.items.map((t: { id: number }) => ({ tagId: t.id, action: 'leave', note: 'Valve left open for venting until tomorrow' }));
+    await Organisation.update({ visitSummaryToClient: true }, { where: { id: u.engineer2.organisationId } });
+    const res = await as('engineer2').post(`/api/visits/${open.body.visit.id}/end`, { decisions });
+    expect(res.status).toBe(200);
+    const toClient = await outboxRows(env.t, "kind = 'visit-summary' AND to_email = 'estates@hazel-primary.test'");
+    expect(toClient).toHaveLength(1);
+    expect(toClient[0].payload).toMatchObject({ forClient: true, recipientName: 'Estates office' });
+    // The earlier visit, ended while the setting was off, sent the client nothing.
+    expect(JSON.stringify(toClient[0].payload)).not.toContain('JOB-2231');
   });
 });

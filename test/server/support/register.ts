@@ -8,6 +8,7 @@ export function as(t: TestApp, token: string) {
     get: (path: string) => request(t.app).get(path).set(auth),
     post: (path: string, body?: object) => request(t.app).post(path).set(auth).send(body),
     patch: (path: string, body: object) => request(t.app).patch(path).set(auth).send(body),
+    put: (path: string, body: object) => request(t.app).put(path).set(auth).send(body),
     delete: (path: string) => request(t.app).delete(path).set(auth),
     upload: (path: string, field: string, content: Buffer, filename: string, contentType = 'application/octet-stream') =>
       request(t.app).post(path).set(auth).attach(field, content, { filename, contentType }),

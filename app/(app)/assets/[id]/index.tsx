@@ -12,6 +12,7 @@ import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { AssetLabelCard } from '@/components/labels/asset-label-card';
+import { ConnectionsCard } from '@/components/connections/connections-card';
 import { ItemOffline } from '@/components/offline/pending-actions';
 import { AssetReadingsSection } from '@/components/readings/asset-readings-section';
 import { AssetDetails } from '@/components/register/asset-details';
@@ -63,6 +64,7 @@ export default function AssetScreen() {
             <ItemOffline asset={a} />
             {a.archived ? null : <VisitBanner siteId={a.siteId} siteName={a.siteName} next={`/assets/${id}`} now={now} />}
             <AssetDetails asset={a} />
+            <ConnectionsCard asset={a} />
             <AssetReadingsSection asset={a} />
             <Card>
               <Text variant="title">Photos</Text>

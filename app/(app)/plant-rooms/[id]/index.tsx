@@ -41,6 +41,7 @@ export default function PlantRoomScreen() {
           actions={
             <>
               {perms.canAdd ? <Button title="Add item" onPress={() => router.push({ pathname: '/assets/new', params: { siteId: r.siteId, plantRoomId: id } })} testID="room-add-item" /> : null}
+              <Button title="Diagram" variant="secondary" onPress={() => router.push(`/plant-rooms/${id}/diagram`)} testID="room-diagram" />
               {perms.canEditRecord(r.createdBy) ? <Button title="Edit room" variant="secondary" onPress={() => router.push(`/plant-rooms/${id}/edit`)} /> : null}
             </>
           }
