@@ -39,7 +39,7 @@ const raise = async (who = 'engineer') => {
   expect(res.status).toBe(201);
   return res.body as { id: number };
 };
-const eventTypes = async (id: number) => (await as('viewer').get(`/api/tags/${id}`)).body.events.map((e: { type: string }) => e.type);
+const eventTypes = async (id: number) => (await as('supervisor').get(`/api/tags/${id}`)).body.events.map((e: { type: string }) => e.type);
 
 describe('POST /api/tags/:id/handover (offer) and /handover/accept', () => {
   it('transfers the tag only when the named colleague accepts with their own lock, both people recorded in one event', async () => {

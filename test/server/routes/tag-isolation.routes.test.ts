@@ -82,7 +82,7 @@ describe('proving an isolation', () => {
   it('is not proved until a proof is recorded; the proof names method, instrument, reading, who and when', async () => {
     const tag = (await raiseOn(boilerIsolation())).body;
     expect(tag.proved).toBe(false);
-    expect((await as('viewer').get(`/api/assets/${plant.boiler.id}`)).body.unprovedIsolations).toBeGreaterThanOrEqual(1);
+    expect((await as('engineer2').get(`/api/assets/${plant.boiler.id}`)).body.unprovedIsolations).toBeGreaterThanOrEqual(1);
     expect((await as('engineer').post(`/api/tags/${tag.id}/prove`, { method: 'absence-of-voltage' })).body.error.fields).toHaveProperty('instrument');
     expect((await as('engineer2').post(`/api/tags/${tag.id}/prove`, { method: 'try-start' })).status).toBe(403);
     // OSHA 29 CFR 1910.147(d)(6): before work, the employee verifies that isolation and de-energisation have been accomplished.
