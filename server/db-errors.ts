@@ -12,6 +12,7 @@ const UNAVAILABLE_ERRNOS = new Set([
   1040, // too many connections
   1047, // WSREP has not yet prepared node for application use (a Galera node out of the cluster)
   1053, // server shutdown in progress
+  1205, // lock wait timeout, also a Galera node's causality wait (wsrep_sync_wait) that the cluster could not answer in time
   1180, // error during COMMIT: on Galera, the node lost the primary component while the transaction replicated
   1927, // connection killed
   2002, 2003, 2006, 2013, // cannot connect, server gone away, lost connection

@@ -1,12 +1,15 @@
 import { useRouter } from 'expo-router';
 import { useState } from 'react';
 import { LabelCodeEntry } from '@/components/labels/label-code-entry';
-import { LabelScanner } from '@/components/labels/label-scanner';
+import { lazyPart } from '@/components/ui/lazy-part';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { parseLabelUrl } from '@/shared/rules/label-code';
+
+// The camera, its QR reader and the reader's wasm load only on this screen.
+const LabelScanner = lazyPart(() => import('@/components/labels/label-scanner').then((m) => m.LabelScanner));
 
 export default function ScanScreen() {
   const router = useRouter();

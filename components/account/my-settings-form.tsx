@@ -6,8 +6,9 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
-import { RequestError, errorMessage } from '@/hooks/api/request';
+import { FormTextField } from '@/components/forms/bound-fields';
+import { FormStatusBanner } from '@/components/forms/status-banner';
+import { submitForm } from '@/components/forms/submit';
 import { useUpdateMySettingsMutation } from '@/hooks/api/use-account';
 import { NOTIFICATION_LABELS, type NotificationKey } from '@/shared/rules/notifications';
 import { mySettingsSchema } from '@/shared/schemas/team';
@@ -29,30 +30,21 @@ export function MySettingsForm({ settings }: { settings: MySettings }) {
     <Formik<Values>
       initialValues={initial}
       validationSchema={mySettingsSchema}
-      onSubmit={async (values, { setErrors, setStatus, resetForm }) => {
-        setStatus(undefined);
-        try {
-          await update.mutateAsync(mySettingsSchema.cast({ contactPhone: values.contactPhone.trim() || null, notifications: values.notifications }));
-          // The saved values become the new starting point, so the form is no longer dirty.
-          resetForm({ values, status: { saved: true } });
-        } catch (err) {
-          if (err instanceof RequestError && err.fields) setErrors(err.fields);
-          setStatus({ error: errorMessage(err) });
-        }
+      onSubmit={async (values, helpers) => {
+        const saved = await submitForm(helpers, () => update.mutateAsync(mySettingsSchema.cast({ contactPhone: values.contactPhone.trim() || null, notifications: values.notifications })));
+        // The saved values become the new starting point, so the form is no longer dirty.
+        if (saved) helpers.resetForm({ values, status: { saved: true } });
       }}
     >
-      {({ handleChange, handleBlur, handleSubmit, setFieldValue, values, errors, touched, isSubmitting, status, dirty }) => {
-        const s = status as { saved?: boolean; error?: string } | undefined;
+      {({ handleSubmit, setFieldValue, values, isSubmitting, status, dirty }) => {
+        const saved = !!(status as { saved?: boolean } | undefined)?.saved;
         return (
           <Card>
             <Text variant="title">Contact and e-mails</Text>
-            <TextField
+            <FormTextField
+              name="contactPhone"
               label="Contact phone"
               hint="Filled in on tags you raise and shown on the board, so a supervisor can reach you."
-              value={values.contactPhone}
-              onChangeText={handleChange('contactPhone')}
-              onBlur={handleBlur('contactPhone')}
-              error={touched.contactPhone && errors.contactPhone}
               keyboardType="phone-pad"
               inputMode="tel"
               autoComplete="tel"
@@ -86,8 +78,8 @@ export function MySettingsForm({ settings }: { settings: MySettings }) {
             <Text variant="small" muted testID="settings-mail-from">
               {`E-mails go to ${settings.email}. They come from this Isoledger server's own sending address, never from a person; if they land in junk, mark that sender as safe. Invitation and password links are always sent.`}
             </Text>
-            {s?.error ? <Notice tone="danger" word="Not saved">{s.error}</Notice> : null}
-            {s?.saved && !dirty ? <Notice tone="safe" word="Saved">Your settings are saved.</Notice> : null}
+            {saved ? null : <FormStatusBanner word="Not saved" />}
+            {saved && !dirty ? <Notice tone="safe" word="Saved">Your settings are saved.</Notice> : null}
             <Button title="Save settings" onPress={() => handleSubmit()} busy={isSubmitting} disabled={!dirty} testID="settings-save" style={{ alignSelf: 'flex-start' }} />
           </Card>
         );

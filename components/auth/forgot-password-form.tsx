@@ -5,9 +5,10 @@ import { colors } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
 import { AuthCard } from '@/components/auth/auth-card';
-import { RequestError, errorMessage } from '@/hooks/api/request';
+import { FormTextField } from '@/components/forms/bound-fields';
+import { FormStatusBanner } from '@/components/forms/status-banner';
+import { submitForm } from '@/components/forms/submit';
 import { useResetRequestMutation } from '@/hooks/api/use-account';
 import { resetRequestSchema, type ResetRequestInput } from '@/shared/schemas/team';
 
@@ -27,26 +28,18 @@ export function ForgotPasswordForm() {
         <Formik<ResetRequestInput>
           initialValues={{ email: '' }}
           validationSchema={resetRequestSchema}
-          onSubmit={async (values, { setErrors, setStatus }) => {
-            setStatus(undefined);
-            try {
-              setAnswer((await reset.mutateAsync(resetRequestSchema.cast(values))).message);
-            } catch (err) {
-              if (err instanceof RequestError && err.fields) setErrors(err.fields);
-              else setStatus(errorMessage(err));
-            }
+          onSubmit={async (values, helpers) => {
+            const answered = await submitForm(helpers, () => reset.mutateAsync(resetRequestSchema.cast(values)));
+            if (answered) setAnswer(answered.message);
           }}
         >
-          {({ handleChange, handleBlur, handleSubmit, values, errors, touched, isSubmitting, status }) => (
+          {({ handleSubmit, isSubmitting }) => (
             <>
               <Text>Give the e-mail address you sign in with. If it belongs to an account, we send a link to choose a new password.</Text>
-              {status ? <Notice tone="danger" word="Not sent">{status}</Notice> : null}
-              <TextField
+              <FormStatusBanner word="Not sent" />
+              <FormTextField
+                name="email"
                 label="E-mail"
-                value={values.email}
-                onChangeText={handleChange('email')}
-                onBlur={handleBlur('email')}
-                error={touched.email && errors.email}
                 autoCapitalize="none"
                 autoComplete="email"
                 keyboardType="email-address"

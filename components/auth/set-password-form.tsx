@@ -6,7 +6,8 @@ import { colors } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
+import { FormTextField } from '@/components/forms/bound-fields';
+import { nestErrors } from '@/components/forms/submit';
 import { AuthCard } from '@/components/auth/auth-card';
 import { RequestError, errorMessage } from '@/hooks/api/request';
 import { useSetPasswordMutation } from '@/hooks/api/use-account';
@@ -45,12 +46,12 @@ export function SetPasswordForm({ token }: { token: string }) {
             const { token: t, password } = setPasswordSchema.cast(values);
             setDoneFor((await setPassword.mutateAsync({ token: t, password })).email);
           } catch (err) {
-            if (err instanceof RequestError && err.fields && !err.fields.token) setErrors(err.fields);
+            if (err instanceof RequestError && err.fields && !err.fields.token) setErrors(nestErrors(err.fields));
             setStatus({ message: errorMessage(err), badLink: err instanceof RequestError && (err.code === 'link-invalid' || !!err.fields?.token) });
           }
         }}
       >
-        {({ handleChange, handleBlur, handleSubmit, values, errors, touched, isSubmitting, status, submitCount }) => {
+        {({ handleSubmit, errors, isSubmitting, status, submitCount }) => {
           const problem = status as { message: string; badLink: boolean } | undefined;
           return (
             <>
@@ -62,27 +63,8 @@ export function SetPasswordForm({ token }: { token: string }) {
                 </Notice>
               ) : null}
               {submitCount > 0 && errors.token ? <Notice tone="danger" word="Link incomplete">{errors.token}</Notice> : null}
-              <TextField
-                label="New password"
-                value={values.password}
-                onChangeText={handleChange('password')}
-                onBlur={handleBlur('password')}
-                error={touched.password && errors.password}
-                secureTextEntry
-                autoComplete="new-password"
-                testID="set-password-password"
-              />
-              <TextField
-                label="Type it again"
-                value={values.confirm}
-                onChangeText={handleChange('confirm')}
-                onBlur={handleBlur('confirm')}
-                error={touched.confirm && errors.confirm}
-                secureTextEntry
-                autoComplete="new-password"
-                onSubmitEditing={() => handleSubmit()}
-                testID="set-password-confirm"
-              />
+              <FormTextField name="password" label="New password" secureTextEntry autoComplete="new-password" testID="set-password-password" />
+              <FormTextField name="confirm" label="Type it again" secureTextEntry autoComplete="new-password" onSubmitEditing={() => handleSubmit()} testID="set-password-confirm" />
               <Button title="Save password" onPress={() => handleSubmit()} busy={isSubmitting} testID="set-password-submit" />
               <Link href="/sign-in"><Text style={linkStyle}>Back to sign in</Text></Link>
             </>

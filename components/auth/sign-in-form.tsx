@@ -5,9 +5,10 @@ import { colors, radius, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
 import { BrandMark } from '@/components/nav/brand-mark';
-import { RequestError, errorMessage } from '@/hooks/api/request';
+import { FormTextField } from '@/components/forms/bound-fields';
+import { FormStatusBanner } from '@/components/forms/status-banner';
+import { submitForm } from '@/components/forms/submit';
 import { useSignInMutation } from '@/hooks/api/use-auth';
 import { signInSchema, type SignInInput } from '@/shared/schemas/auth';
 
@@ -25,38 +26,16 @@ export function SignInForm() {
       <Formik<SignInInput>
         initialValues={{ email: '', password: '' }}
         validationSchema={signInSchema}
-        onSubmit={async (values, { setErrors, setStatus }) => {
-          setStatus(undefined);
-          try {
-            await signIn.mutateAsync(signInSchema.cast(values));
-          } catch (err) {
-            if (err instanceof RequestError && err.fields) setErrors(err.fields);
-            setStatus(errorMessage(err));
-          }
-        }}
+        onSubmit={(values, helpers) => submitForm(helpers, () => signIn.mutateAsync(signInSchema.cast(values)))}
       >
-        {({ handleChange, handleBlur, handleSubmit, values, errors, touched, isSubmitting, status }) => (
+        {({ handleSubmit, isSubmitting }) => (
           <View style={styles.card}>
             <Text variant="title">Sign in</Text>
-            {status ? <Notice tone="danger" word="Not signed in">{status}</Notice> : null}
-            <TextField
-              label="E-mail"
-              value={values.email}
-              onChangeText={handleChange('email')}
-              onBlur={handleBlur('email')}
-              error={touched.email && errors.email}
-              autoCapitalize="none"
-              autoComplete="email"
-              keyboardType="email-address"
-              inputMode="email"
-              testID="sign-in-email"
-            />
-            <TextField
+            <FormStatusBanner word="Not signed in" />
+            <FormTextField name="email" label="E-mail" autoCapitalize="none" autoComplete="email" keyboardType="email-address" inputMode="email" testID="sign-in-email" />
+            <FormTextField
+              name="password"
               label="Password"
-              value={values.password}
-              onChangeText={handleChange('password')}
-              onBlur={handleBlur('password')}
-              error={touched.password && errors.password}
               secureTextEntry
               autoComplete="current-password"
               onSubmitEditing={() => handleSubmit()}

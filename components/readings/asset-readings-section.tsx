@@ -3,17 +3,19 @@ import { View } from 'react-native';
 import { ReadingSetCard } from '@/components/readings/reading-set-card';
 import { ReadingsForm } from '@/components/readings/readings-form';
 import { SystemPanel } from '@/components/readings/system-panel';
-import { TrendChart } from '@/components/readings/trend-chart';
 import { space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
+import { lazyPart } from '@/components/ui/lazy-part';
 import { errorMessage } from '@/hooks/api/request';
 import { useReadingsQuery } from '@/hooks/api/use-readings';
 import { usePermissions } from '@/hooks/auth/use-permissions';
 import type { ReadingSet } from '@/shared/types/readings';
 import type { Asset } from '@/shared/types/register';
+
+const TrendChart = lazyPart(() => import('@/components/readings/trend-chart').then((m) => m.TrendChart));
 
 const LATEST_SHOWN = 3;
 

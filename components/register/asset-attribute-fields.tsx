@@ -2,7 +2,7 @@ import { getIn, useFormikContext } from 'formik';
 import { Card } from '@/components/ui/card';
 import { SelectField } from '@/components/ui/select-field';
 import { Text } from '@/components/ui/text';
-import { FormTextField } from '@/components/register/form-support';
+import { FormTextField } from '@/components/forms/bound-fields';
 import { ATTRIBUTE_META, optionLabel } from '@/components/register/register-vocabulary';
 import { attributeFields, type AssetFormValues } from '@/components/register/asset-form-values';
 import { ASSET_TYPE_LABELS } from '@/shared/rules/register';

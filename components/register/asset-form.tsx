@@ -9,7 +9,9 @@ import { Text } from '@/components/ui/text';
 import { AssetAttributeFields } from '@/components/register/asset-attribute-fields';
 import { toAssetInput, validateAssetForm, type AssetFormValues } from '@/components/register/asset-form-values';
 import { EnergyToggles } from '@/components/register/energy-chips';
-import { FormTextField, applyServerError } from '@/components/register/form-support';
+import { FormTextField } from '@/components/forms/bound-fields';
+import { FormStatusBanner } from '@/components/forms/status-banner';
+import { submitForm } from '@/components/forms/submit';
 import { formatDate } from '@/components/register/register-vocabulary';
 import { useSitePlantRoomsQuery } from '@/hooks/api/use-plant-rooms';
 import { useSitesQuery } from '@/hooks/api/use-sites';
@@ -28,14 +30,7 @@ const multiline = { multiline: true, numberOfLines: 4, style: { minHeight: 104, 
 
 /** One form for adding and editing a plant item; the most-used fields first for a quick walk-round. */
 export function AssetForm({ initialValues, submitLabel, onSubmit, onCancel }: Props) {
-  const submit = async (values: AssetFormValues, { setErrors, setStatus }: FormikHelpers<AssetFormValues>) => {
-    setStatus(undefined);
-    try {
-      await onSubmit(await toAssetInput(values));
-    } catch (err) {
-      applyServerError(err, setErrors, setStatus);
-    }
-  };
+  const submit = (values: AssetFormValues, helpers: FormikHelpers<AssetFormValues>) => submitForm(helpers, async () => onSubmit(await toAssetInput(values)));
   return (
     <Formik<AssetFormValues> initialValues={initialValues} validate={validateAssetForm} onSubmit={submit}>
       {({ values, errors, submitCount, setFieldValue, handleSubmit, isSubmitting, status }) => {
@@ -43,7 +38,7 @@ export function AssetForm({ initialValues, submitLabel, onSubmit, onCancel }: Pr
         const due = nextServiceDue(/^\d{4}-\d{2}-\d{2}$/.test(values.lastServiceDate) ? values.lastServiceDate : null, Number(values.serviceIntervalMonths) || null);
         return (
           <View style={{ gap: space.lg }}>
-            {status ? <Notice tone="danger" word="Not saved">{status}</Notice> : null}
+            <FormStatusBanner word="Not saved" />
             {submitCount > 0 && Object.keys(errors).length > 0 && !status ? <Notice tone="caution" word="Check the form">Some fields need attention; each says what is wrong.</Notice> : null}
             <Card>
               <Text variant="title">Where</Text>

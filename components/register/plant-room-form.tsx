@@ -4,10 +4,11 @@ import { View } from 'react-native';
 import { colors, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
-import { Notice } from '@/components/ui/notice';
 import { SelectField } from '@/components/ui/select-field';
 import { Text } from '@/components/ui/text';
-import { FormTextField, applyServerError, prepareValues } from '@/components/register/form-support';
+import { FormTextField } from '@/components/forms/bound-fields';
+import { FormStatusBanner } from '@/components/forms/status-banner';
+import { prepareValues, submitForm } from '@/components/forms/submit';
 import { SAFETY_LOCATIONS } from '@/components/register/register-vocabulary';
 import { useSitesQuery } from '@/hooks/api/use-sites';
 import { plantRoomSchema, type PlantRoomInput } from '@/shared/schemas/register';
@@ -38,18 +39,11 @@ export function PlantRoomForm({ room, siteId, submitLabel, onSubmit, onCancel }:
     <Formik<Values>
       initialValues={initialFrom(room, siteId)}
       validationSchema={plantRoomSchema}
-      onSubmit={async (values, { setErrors, setStatus }) => {
-        setStatus(undefined);
-        try {
-          await onSubmit(await plantRoomSchema.validate(prepareValues(values), { stripUnknown: true }));
-        } catch (err) {
-          applyServerError(err, setErrors, setStatus);
-        }
-      }}
+      onSubmit={(values, helpers) => submitForm(helpers, async () => onSubmit(await plantRoomSchema.validate(prepareValues(values), { stripUnknown: true })))}
     >
-      {({ values, errors, submitCount, setFieldValue, handleSubmit, isSubmitting, status }) => (
+      {({ values, errors, submitCount, setFieldValue, handleSubmit, isSubmitting }) => (
         <View style={{ gap: space.lg }}>
-          {status ? <Notice tone="danger" word="Not saved">{status}</Notice> : null}
+          <FormStatusBanner word="Not saved" />
           <Card>
             <Text variant="title">Plant room</Text>
             <SelectField

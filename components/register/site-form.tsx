@@ -3,9 +3,10 @@ import { View } from 'react-native';
 import { space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
-import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { FormTextField, applyServerError, prepareValues } from '@/components/register/form-support';
+import { FormTextField } from '@/components/forms/bound-fields';
+import { FormStatusBanner } from '@/components/forms/status-banner';
+import { prepareValues, submitForm } from '@/components/forms/submit';
 import { siteSchema, type SiteInput } from '@/shared/schemas/register';
 import type { Site } from '@/shared/types/register';
 
@@ -25,18 +26,11 @@ export function SiteForm({ site, submitLabel, onSubmit, onCancel }: { site?: Sit
     <Formik<Values>
       initialValues={initialFrom(site)}
       validationSchema={siteSchema}
-      onSubmit={async (values, { setErrors, setStatus }) => {
-        setStatus(undefined);
-        try {
-          await onSubmit(await siteSchema.validate(prepareValues(values), { stripUnknown: true }));
-        } catch (err) {
-          applyServerError(err, setErrors, setStatus);
-        }
-      }}
+      onSubmit={(values, helpers) => submitForm(helpers, async () => onSubmit(await siteSchema.validate(prepareValues(values), { stripUnknown: true })))}
     >
-      {({ handleSubmit, isSubmitting, status }) => (
+      {({ handleSubmit, isSubmitting }) => (
         <View style={{ gap: space.lg }}>
-          {status ? <Notice tone="danger" word="Not saved">{status}</Notice> : null}
+          <FormStatusBanner word="Not saved" />
           <Card>
             <Text variant="title">Site</Text>
             <FormTextField name="name" label="Site name" />

@@ -22,6 +22,8 @@ export interface AssetFilters {
   includeArchived?: boolean;
 }
 
+const ASSET_FRESH_MS = 5_000;
+
 export const assetKeys = {
   all: ['assets'] as const,
   lists: () => [...assetKeys.all, 'list'] as const,
@@ -50,7 +52,8 @@ export function useAssetsQuery(filters: AssetFilters, enabled = true) {
 }
 
 export function useAssetQuery(id: number) {
-  return useQuery({ queryKey: assetKeys.detail(id), queryFn: () => request<Asset>(`/assets/${id}`), enabled: id > 0 });
+  // Fresh for a few seconds, so a record just answered by a label scan is shown from the cache, not fetched again.
+  return useQuery({ queryKey: assetKeys.detail(id), queryFn: () => request<Asset>(`/assets/${id}`), enabled: id > 0, staleTime: ASSET_FRESH_MS });
 }
 
 function useInvalidateRegister() {

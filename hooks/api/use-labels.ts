@@ -10,11 +10,19 @@ export const labelKeys = {
   retired: (assetId: number) => [...labelKeys.all, 'retired', assetId] as const,
 };
 
+/**
+ * The item a label code opens. The answer is the item's whole record, so it seeds the record's cache:
+ * a scan costs one fetch of the record, not a look-up and then the record again.
+ */
 export function useLabelQuery(code: string) {
   const qc = useQueryClient();
   return useQuery({
     queryKey: labelKeys.code(code),
-    queryFn: () => request<Asset>(`/labels/${encodeURIComponent(code)}`),
+    queryFn: async () => {
+      const asset = await request<Asset>(`/labels/${encodeURIComponent(code)}`);
+      qc.setQueryData(assetKeys.detail(asset.id), asset);
+      return asset;
+    },
     enabled: !!code,
     staleTime: 0,
     // A label never looked up before still opens with no signal when its plant room's items were seen recently.

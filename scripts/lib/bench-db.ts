@@ -35,7 +35,7 @@ export async function captureBoardSql(sequelize: Sequelize, actor: AuthUser): Pr
   // Sequelize's typings leave out `options`, which every instance has.
   const options = (sequelize as unknown as { options: { logging: unknown } }).options;
   const before = options.logging;
-  options.logging = (sql: string) => { statements.push(sql.replace(/^Executing \([^)]*\): /, '')); };
+  options.logging = (sql: string) => { statements.push(sql.replace(/^Executing \([^)]*\): /, '').replace(/ - parameters:\[\]$/, '')); };
   try {
     await getBoard(sequelize, actor, boardQuery.validateSync({}), { page: 1, pageSize: 50, offset: 0 });
   } finally {

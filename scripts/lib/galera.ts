@@ -48,6 +48,9 @@ export function galeraArgs(all: GaleraNodePorts[], index: number, clusterName: s
     '--wsrep-sst-method=rsync',
     `--wsrep-sst-receive-address=127.0.0.1:${me.sst}`,
     '--default-storage-engine=InnoDB',
+    // Reads wait until this node has applied every earlier commit of the cluster: a tag raised through one app
+    // server is on the board of the next request, whichever server answers it.
+    '--wsrep-sync-wait=1',
     // Each commit is on the other nodes before it is acknowledged; rsync SST of a node's binary logs fails in this
     // MariaDB release, so loopback nodes keep none (a production cluster keeps them on a separate volume).
     '--skip-log-bin',

@@ -113,9 +113,9 @@ export async function startPrivateMariaDb(opts: StartOptions): Promise<PrivateMa
   let backoffMs = 1000;
   let restartTimer: ReturnType<typeof setTimeout> | undefined;
 
-  const launch = (first: boolean) => {
+  const launch = (extra: string[]) => {
     // Its own process group, so a Ctrl-C in the terminal reaches only our process, which then stops it in order.
-    child = spawn(findBinary('mariadbd'), first ? [...args, ...(opts.firstStartArgs ?? [])] : args, { stdio: 'ignore', detached: true });
+    child = spawn(findBinary('mariadbd'), [...args, ...extra], { stdio: 'ignore', detached: true });
     exited = false;
     startedAt = Date.now();
     child.once('exit', (code, signal) => {
@@ -128,7 +128,7 @@ export async function startPrivateMariaDb(opts: StartOptions): Promise<PrivateMa
       log(`mariadbd on port ${opts.port} exited (${signal ?? `code ${code}`}); restarting in ${backoffMs / 1000} s`);
       restartTimer = setTimeout(() => {
         status.restarts += 1;
-        launch(false);
+        launch([]);
         void waitReady(socketPath, opts, () => exited).then(
           () => { status.up = true; log(`mariadbd on port ${opts.port} is back (restart ${status.restarts})`); },
           (err) => log(`mariadbd on port ${opts.port} did not come back: ${(err as Error).message}`),
@@ -139,7 +139,7 @@ export async function startPrivateMariaDb(opts: StartOptions): Promise<PrivateMa
   };
 
   let ready = false;
-  launch(true);
+  launch(opts.firstStartArgs ?? []);
   try {
     await waitReady(socketPath, opts, () => exited);
   } catch (err) {

@@ -4,6 +4,7 @@ import { PlantRoom } from '@/server/models/plant-room.model';
 import { RecentPlace, type PlaceType } from '@/server/models/recent-place.model';
 import { Site } from '@/server/models/site.model';
 import { liveTagCounts } from '@/server/services/live-tags.service';
+import { siteWhere } from '@/server/services/site-access.service';
 import type { RecentPlace as RecentPlaceDto } from '@/shared/types/visits';
 
 const RECENT_LIMIT = 6;
@@ -13,14 +14,14 @@ export async function recordOpened(actor: Pick<AuthUser, 'id'>, placeType: Place
   await RecentPlace.upsert({ userId: actor.id, placeType, placeId, openedAt: clock.now() });
 }
 
-/** The sites and plant rooms the person opened last, newest first, with their live-tag counts. */
+/** The sites and plant rooms the person opened last and may still see, newest first, with their live-tag counts. */
 export async function recentPlaces(actor: AuthUser): Promise<RecentPlaceDto[]> {
   const rows = await RecentPlace.findAll({ where: { userId: actor.id }, order: [['openedAt', 'DESC']], limit: RECENT_LIMIT * 2 });
   const siteIds = rows.filter((r) => r.placeType === 'site').map((r) => r.placeId);
   const roomIds = rows.filter((r) => r.placeType === 'plant-room').map((r) => r.placeId);
   const [sites, rooms] = await Promise.all([
-    Site.findAll({ where: { id: siteIds, organisationId: actor.organisationId } }),
-    PlantRoom.findAll({ where: { id: roomIds, organisationId: actor.organisationId }, include: [{ model: Site, as: 'site', attributes: ['id', 'name'] }] }),
+    Site.findAll({ where: { id: siteIds, organisationId: actor.organisationId, ...siteWhere(actor, 'id') } }),
+    PlantRoom.findAll({ where: { id: roomIds, organisationId: actor.organisationId, ...siteWhere(actor, 'siteId') }, include: [{ model: Site, as: 'site', attributes: ['id', 'name'] }] }),
   ]);
   const [siteCounts, roomCounts] = await Promise.all([
     liveTagCounts(actor.organisationId, 'site', sites.map((s) => s.id)),

@@ -30,7 +30,6 @@ export const pagingQuery = yup.object({
   page: wholeField('page').min(1, 'page starts at 1.').max(MAX_PAGE, `page must be at most ${MAX_PAGE}.`).default(1),
   pageSize: wholeField('pageSize').min(1, 'pageSize must be at least 1.').transform((v: number) => (Number.isFinite(v) ? Math.min(v, MAX_PAGE_SIZE) : v)).default(DEFAULT_PAGE_SIZE),
 });
-export type PagingQuery = yup.InferType<typeof pagingQuery>;
 
 /** An optional choice from a fixed list in a query string (`?kind=isolation`). */
 export const oneOfField = <T extends string>(name: string, values: readonly T[]) =>

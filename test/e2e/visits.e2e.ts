@@ -128,6 +128,21 @@ describe('an engineer’s visit', () => {
     await w.context.close();
   });
 
+  it('shows the engineer their own live tags and recent places on the home screen, phone and desk', async () => {
+    for (const [viewport, name] of [[PHONE, 'phone'], [DESKTOP, 'desktop']] as const) {
+      const w = await signedIn(viewport, 'engineer@example.test', 'engineer');
+      await w.page.getByTestId('live-tags').waitFor();
+      const mine = await text(w.page, 'live-tags');
+      // The override left in place is still held; the one past its expiry comes first.
+      expect(mine).toContain(OVERRIDE_REASON);
+      expect(mine.indexOf('past expiry by')).toBeLessThan(mine.indexOf(OVERRIDE_REASON));
+      await expect(text(w.page, 'home-recent')).resolves.toContain('Quillmere Academy (demo)');
+      await screenshot(w.page, `visits-home-${name}`);
+      clean(w);
+      await w.context.close();
+    }
+  });
+
   it('sends the summary to the supervisor’s inbox with the override in it', async () => {
     const mail = await mailTo('supervisor@example.test', /^Visit ended: Quillmere/);
     expect(mail.text).toContain(OVERRIDE_REASON);

@@ -6,6 +6,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { Organisation } from '@/server/models/organisation.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
+import { UserSiteAccess } from '@/server/models/user-site-access.model';
 import { Visit } from '@/server/models/visit.model';
 import { VisitDecision } from '@/server/models/visit-decision.model';
 import { TagEvent } from '@/server/models/tag-event.model';
@@ -252,5 +253,17 @@ describe('end-of-visit summary to the site’s client contact', () => {
     expect(toClient[0].payload).toMatchObject({ forClient: true, recipientName: 'Estates office' });
     // The earlier visit, ended while the setting was off, sent the client nothing.
     expect(JSON.stringify(toClient[0].payload)).not.toContain('JOB-2231');
+  });
+});
+
+describe('GET /api/me/recent-places', () => {
+  it('lists the places the person opened, newest first, and drops a site a viewer may no longer see', async () => {
+    const mine = await as('viewer').get('/api/me/recent-places');
+    expect(mine.status).toBe(200);
+    expect(mine.body.items.map((p: { type: string; id: number }) => `${p.type}:${p.id}`)).toEqual([`site:${plant.site.id}`, `plant-room:${room.id}`]);
+    expect(mine.body.items[1]).toMatchObject({ name: 'Basement boiler room', siteName: 'Hazel Primary' });
+    await UserSiteAccess.destroy({ where: { userId: u.viewer.id } });
+    expect((await as('viewer').get('/api/me/recent-places')).body.items).toEqual([]);
+    expect((await as('larch').get('/api/me/recent-places')).body.items).toEqual([]);
   });
 });

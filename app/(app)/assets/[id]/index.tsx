@@ -11,7 +11,7 @@ import { Notice } from '@/components/ui/notice';
 import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
-import { AssetLabelCard } from '@/components/labels/asset-label-card';
+import { lazyPart } from '@/components/ui/lazy-part';
 import { ConnectionsCard } from '@/components/connections/connections-card';
 import { ItemOffline } from '@/components/offline/pending-actions';
 import { AssetReadingsSection } from '@/components/readings/asset-readings-section';
@@ -26,6 +26,8 @@ import { usePermissions } from '@/hooks/auth/use-permissions';
 import { useNow } from '@/components/tags/use-now';
 import { VisitBanner } from '@/components/visits/visit-banner';
 import { ASSET_TYPE_LABELS } from '@/shared/rules/register';
+
+const AssetLabelCard = lazyPart(() => import('@/components/labels/asset-label-card').then((m) => m.AssetLabelCard));
 
 export default function AssetScreen() {
   const id = Number(useLocalSearchParams<{ id: string }>().id);
