@@ -7,8 +7,10 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { IsolationCautions } from '@/components/tags/isolation-cautions';
+import { IsolationCautions, OverrideCautions } from '@/components/tags/isolation-cautions';
 import { scrollToStart } from '@/components/tags/scroll-to';
+import { withPlan } from '@/components/connections/plan-to-raise';
+import type { IsolationPlan } from '@/shared/types/connections';
 import { firstStepWithError, initialRaiseValues, RAISE_STEPS, stepOf, toRaiseInput, validateRaise, type RaiseValues } from '@/components/tags/raise-form-values';
 import { DetailsStep } from '@/components/tags/raise-steps-details';
 import { KindReasonStep } from '@/components/tags/raise-steps-kind';
@@ -27,12 +29,14 @@ interface Props {
   site: Site;
   me: User;
   initialKind: TagKind;
+  /** An isolation plan to start from (its sources and points, all editable). */
+  plan?: IsolationPlan;
   onRaised: (tag: Tag) => void;
   onCancel: () => void;
 }
 
 const FIELD_NAMES: [RegExp, string][] = [
-  [/^kind/, 'kind'], [/^reason/, 'reason'], [/^energySources/, 'energy sources'], [/^points/, 'isolation points'],
+  [/^kind/, 'kind'], [/^reason/, 'reason'], [/^(energySources|omittedSources)/, 'energy sources'], [/^points/, 'isolation points'], [/^proof/, 'proof'],
   [/^lockNumber/, 'lock or tag number'], [/^normalState/, 'normal state'], [/^leftState/, 'state it was left in'],
   [/^expiresAt/, 'expiry'], [/^contactPhone/, 'contact phone'],
 ];
@@ -44,7 +48,7 @@ function errorSummary(errors: FieldErrors): string {
 }
 
 /** Raising a tag: step by step on a phone, one page on a wide screen; the same shared schema as the server. */
-export function RaiseTagForm({ asset, site, me, initialKind, onRaised, onCancel }: Props) {
+export function RaiseTagForm({ asset, site, me, initialKind, plan, onRaised, onCancel }: Props) {
   const { isWide } = useBreakpoints();
   const raise = useRaiseTagMutation(asset.id);
   // One key for this form until a tag is made: every retry of the submission sends it, so the server makes one tag.
@@ -53,12 +57,12 @@ export function RaiseTagForm({ asset, site, me, initialKind, onRaised, onCancel 
   const [tried, setTried] = useState<Set<number>>(new Set());
   const top = useRef<View>(null);
   useEffect(() => { if (step > 0) scrollToStart(top.current); }, [step]);
-  const initialValues = useMemo(() => initialRaiseValues(initialKind, endOfDayInZone(new Date(), site.timeZone), asset.energySources), [initialKind, site.timeZone, asset.energySources]);
+  const initialValues = useMemo(() => withPlan(initialRaiseValues(initialKind, endOfDayInZone(new Date(), site.timeZone), asset.energySources), plan), [initialKind, site.timeZone, asset.energySources, plan]);
 
   return (
     <Formik<RaiseValues>
       initialValues={initialValues}
-      validate={(v) => validateRaise(v, me.role) as Promise<FormikErrors<RaiseValues>>}
+      validate={(v) => validateRaise(v, me.role, asset.energySources) as Promise<FormikErrors<RaiseValues>>}
       onSubmit={async (values, { setErrors, setStatus }) => {
         setStatus(undefined);
         try {
@@ -101,7 +105,7 @@ export function RaiseTagForm({ asset, site, me, initialKind, onRaised, onCancel 
         const summary = submitCount > 0 ? errorSummary(all) : '';
         const footer = (
           <View style={{ gap: space.md }}>
-            {isolation ? <IsolationCautions /> : <Notice tone="info" word="Remember">Put the item back to its normal state, or hand the tag over, before you leave site. The tag stays on record until someone clears it.</Notice>}
+            {isolation ? <IsolationCautions /> : <OverrideCautions />}
             {status ? <Notice tone="danger" word="Not raised">{status}</Notice> : null}
             {summary && !status ? <Notice tone="danger" word="Check">{summary}</Notice> : null}
           </View>

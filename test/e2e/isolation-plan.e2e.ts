@@ -9,10 +9,13 @@ let session: Session;
 const baseUrl = inject('baseUrl');
 let boiler: Asset;
 let dosingPot: Asset;
+let raisedTagId = 0;
+// The second demo engineer, so the isolation raised here is not among the first engineer's tags other tests end visits with.
+const ENGINEER = 'engineer2@example.test';
 
 async function signedIn(viewport: { width: number; height: number }): Promise<WatchedPage> {
   const watched = await openPage(session.browser, viewport);
-  await signIn(watched.page, baseUrl, 'engineer@example.test');
+  await signIn(watched.page, baseUrl, ENGINEER);
   await watched.page.getByTestId('home-engineer').waitFor();
   return watched;
 }
@@ -25,14 +28,22 @@ function clean(w: WatchedPage) {
 
 beforeAll(async () => {
   session = await launch();
-  const token = await apiToken(baseUrl, 'engineer@example.test');
+  const token = await apiToken(baseUrl, ENGINEER);
   const find = async (plantId: string) =>
     (await api<ListResponse<Asset>>(baseUrl, token, `/assets?q=${plantId}&pageSize=50`)).items.find((a) => a.plantId === plantId && a.siteName.startsWith('Quillmere'))!;
   boiler = await find('B-02');
   dosingPot = await find('O-01');
   expect([boiler?.id > 0, dosingPot?.id > 0]).toEqual([true, true]);
 });
-afterAll(() => session.close());
+afterAll(async () => {
+  await session.close();
+  // Leave the demo as it was: the holder clears the isolation raised from the plan.
+  if (raisedTagId) {
+    await api(baseUrl, await apiToken(baseUrl, ENGINEER), `/tags/${raisedTagId}/clear`, {
+      method: 'POST', body: { reason: 'Flame sensor replaced and boiler tested', checks: { workComplete: true, guardsRefitted: true, personnelClear: true, testedSafe: true } },
+    });
+  }
+});
 
 describe('isolation planner and plant-room diagram', () => {
   it('on a phone: plans boiler 2 from its connections and goes on to raise the isolation', async () => {
@@ -56,6 +67,25 @@ describe('isolation planner and plant-room diagram', () => {
     await page.getByTestId('raise-from-plan').click();
     await page.getByTestId('raise-tag-form').waitFor();
     expect(new URL(page.url()).searchParams.get('assetId')).toBe(String(boiler.id));
+    await page.getByTestId('raise-reason').fill('Replace the burner flame sensor on boiler 2');
+    await page.getByTestId('raise-next').click();
+    // The plan's points are filled in, nearest first, each one still changeable.
+    const planned = ['GV-B02', 'FS-B02', 'FV-B02', 'RV-B02'];
+    for (const [i, plantId] of planned.entries()) {
+      await expect(text(page, `point-${i}-chosen`)).resolves.toContain(plantId);
+      await page.getByTestId(`point-${i}-change`).waitFor();
+    }
+    await page.getByTestId('raise-lock-number').fill('L-202');
+    await screenshot(page, 'plan-raise-points-phone');
+    await page.getByTestId('raise-next').click();
+    await page.getByTestId('raise-contact-phone').fill('+44 7700 900104');
+    await page.getByTestId('raise-next').click();
+    await page.getByTestId('raise-submit').click();
+    await page.getByTestId('tag-header').waitFor();
+    raisedTagId = Number(new URL(page.url()).pathname.split('/').pop());
+    const points = await text(page, 'tag-points');
+    for (const plantId of planned) expect(points).toContain(plantId);
+    await screenshot(page, 'plan-raised-tag-phone');
     clean(w);
     await w.context.close();
   });
@@ -71,7 +101,7 @@ describe('isolation planner and plant-room diagram', () => {
     const box = (await page.getByTestId('plant-diagram').boundingBox())!;
     const start = (await page.getByTestId('diagram-item-B-02').boundingBox())!;
     expect(Math.abs(start.x + start.width / 2 - (box.x + box.width / 2))).toBeLessThan(2);
-    await expect(page.getByTestId('diagram-item-B-02').getAttribute('aria-label')).resolves.toMatch(/B-02 Boiler 2: Normal/);
+    await expect(page.getByTestId('diagram-item-B-02').getAttribute('aria-label')).resolves.toMatch(/B-02 Boiler 2: Isolated/);
     await screenshot(page, 'diagram-focus-phone');
     await page.getByTestId('diagram-zoom-out').click();
     await page.getByTestId('diagram-zoom-out').click();
@@ -123,7 +153,7 @@ describe('isolation planner and plant-room diagram', () => {
     await page.goto(`${baseUrl}/assets/${boiler.id}/plan`);
     await page.getByTestId('plan-point-GV-B02').waitFor();
     await screenshot(page, 'plan-boiler-desktop');
-    const token = await apiToken(baseUrl, 'engineer@example.test');
+    const token = await apiToken(baseUrl, ENGINEER);
     const valve = (await api<ListResponse<Asset>>(baseUrl, token, `/assets?q=V-01&siteId=${boiler.siteId}`)).items.find((a) => a.plantId === 'V-01')!;
     await page.goto(`${baseUrl}/assets/${valve.id}`);
     await page.getByTestId('closing-affects-gas').waitFor();

@@ -5,20 +5,26 @@ import { Notice } from '@/components/ui/notice';
 import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { RaiseTagForm } from '@/components/tags/raise-tag-form';
+import { TagNoticesBanner } from '@/components/tags/tag-notices-banner';
 import { errorMessage } from '@/hooks/api/request';
 import { useAssetQuery } from '@/hooks/api/use-assets';
 import { useMeQuery } from '@/hooks/api/use-auth';
+import { useIsolationPlanQuery } from '@/hooks/api/use-connections';
 import { useSiteQuery } from '@/hooks/api/use-sites';
+import { ENERGY_SOURCES, type EnergySource } from '@/shared/rules/register';
 import { mayRaise, type TagKind } from '@/shared/rules/tags';
 
 export default function RaiseTagScreen() {
-  const params = useLocalSearchParams<{ assetId?: string; kind?: string }>();
+  const params = useLocalSearchParams<{ assetId?: string; kind?: string; planSources?: string }>();
   const router = useRouter();
   const assetId = Number(params.assetId) || 0;
   const kind: TagKind = params.kind === 'override' ? 'override' : 'isolation';
   const asset = useAssetQuery(assetId);
   const site = useSiteQuery(asset.data?.siteId ?? 0);
   const me = useMeQuery().data;
+  // Opened from an isolation plan: the same plan again, to fill the form's sources and points.
+  const planSources = (params.planSources ?? '').split(',').filter((s): s is EnergySource => (ENERGY_SOURCES as readonly string[]).includes(s));
+  const plan = useIsolationPlanQuery(assetId, planSources, kind === 'isolation' && planSources.length > 0);
 
   if (!assetId) {
     return (
@@ -42,10 +48,13 @@ export default function RaiseTagScreen() {
         if (site.isError) {
           return <Screen title={title} subtitle={subtitle}><Notice tone="danger" word="Cannot load the site">{errorMessage(site.error)}</Notice></Screen>;
         }
-        if (!site.data) return <LoadingView />;
+        if (!site.data || (plan.isFetching && !plan.data)) return <LoadingView />;
         return (
           <Screen title={title} subtitle={subtitle}>
-            <RaiseTagForm asset={item} site={site.data} me={me} initialKind={kind} onRaised={(tag) => router.replace(`/tags/${tag.id}`)} onCancel={() => (router.canGoBack() ? router.back() : router.replace(`/assets/${item.id}`))} />
+            <TagNoticesBanner />
+            {plan.isError ? <Notice tone="info" word="No plan">{`The isolation plan could not be loaded (${errorMessage(plan.error)}). Enter the points yourself.`}</Notice> : null}
+            {plan.data ? <Notice tone="caution" word="From the isolation plan">The sources and points below come from the register. Check each point on site; change or remove any that is wrong, and add what the plan could not see.</Notice> : null}
+            <RaiseTagForm asset={item} site={site.data} me={me} initialKind={kind} plan={plan.data} onRaised={(tag) => router.replace(`/tags/${tag.id}`)} onCancel={() => (router.canGoBack() ? router.back() : router.replace(`/assets/${item.id}`))} />
           </Screen>
         );
       }}
