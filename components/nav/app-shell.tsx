@@ -31,8 +31,8 @@ export function AppShell({ user, children }: { user: User; children: ReactNode }
             return (
               <Link key={item.href} href={item.href as never} asChild>
                 <Pressable style={StyleSheet.flatten([styles.sideItem, active && styles.sideItemActive])} accessibilityRole="link" accessibilityState={{ selected: active }}>
-                  <MaterialCommunityIcons name={item.icon} size={24} color={active ? colors.cautionInk : colors.paper} />
-                  <Text bold={active} style={{ color: active ? colors.cautionInk : colors.paper }}>{item.label}</Text>
+                  <MaterialCommunityIcons name={item.icon} size={24} color={active ? colors.ink : colors.paper} />
+                  <Text bold={active} style={{ color: active ? colors.ink : colors.paper }}>{item.label}</Text>
                 </Pressable>
               </Link>
             );
@@ -58,7 +58,7 @@ export function AppShell({ user, children }: { user: User; children: ReactNode }
             <Link key={item.href} href={item.href as never} asChild>
               <Pressable style={styles.tab} accessibilityRole="link" accessibilityState={{ selected: active }} accessibilityLabel={item.label}>
                 <View style={[styles.tabIcon, active && styles.tabIconActive]}>
-                  <MaterialCommunityIcons name={item.icon} size={24} color={active ? colors.cautionInk : colors.paper} />
+                  <MaterialCommunityIcons name={item.icon} size={24} color={active ? colors.ink : colors.paper} />
                 </View>
                 <Text variant="small" bold={active} style={{ color: colors.paper }}>{item.label}</Text>
               </Pressable>
