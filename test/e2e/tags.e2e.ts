@@ -221,6 +221,8 @@ describe('isolation tags on a plant item', () => {
     // The isolation is off but the override is still on: the item shows as overridden.
     await page.getByTestId('tag-item-link').click();
     await page.getByTestId('asset-tag-history').waitFor();
+    // The record first shows what was cached and then its refetched state.
+    await page.getByTestId('asset-state-word').filter({ hasText: 'Overridden' }).waitFor();
     expect(await text(page, 'asset-state-word')).toBe('Overridden');
     clean(w);
     await w.context.close();
