@@ -65,7 +65,7 @@ async function main() {
     const scenarios: [string, keyof typeof tokens, string][] = [
       ['default view (50 rows, counts)', 'supervisor', ''],
       ['overdue only', 'supervisor', '?state=overdue'],
-      ['one site, sorted by holder', 'supervisor', `?siteId=${siteIds[0]}&sort=author`],
+      ['one site, sorted by holder', 'supervisor', `?siteId=${siteIds[0]}&sort=holder`],
       ['search "seal"', 'supervisor', '?q=seal'],
       ['page 10, sorted by raised desc', 'supervisor', '?page=10&sort=-raised'],
       ['viewer (half the sites)', 'viewer', ''],

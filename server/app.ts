@@ -16,6 +16,7 @@ import { readingsRoutes } from '@/server/routes/readings.routes';
 import { healthRoutes } from '@/server/routes/health.routes';
 import { labelsRoutes } from '@/server/routes/labels.routes';
 import { tagsRoutes } from '@/server/routes/tags.routes';
+import { procedureReviewsRoutes } from '@/server/routes/procedure-reviews.routes';
 import { usersRoutes } from '@/server/routes/users.routes';
 import { createPhotoStorage } from '@/server/lib/create-photo-storage';
 import type { PhotoStorage } from '@/server/lib/photo-storage';
@@ -101,6 +102,7 @@ export function createApp(ctx: AppContext) {
   api.use(heatingSystemsRoutes(ctx));
   api.use(labelsRoutes(ctx));
   api.use(tagsRoutes(ctx));
+  api.use(procedureReviewsRoutes(ctx));
   api.use(boardRoutes(ctx));
   api.use(teamRoutes(ctx));
   api.use(accountRoutes(ctx));

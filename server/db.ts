@@ -17,6 +17,9 @@ import { RetiredLabel } from '@/server/models/retired-label.model';
 import { Tag } from '@/server/models/tag.model';
 import { TagEvent } from '@/server/models/tag-event.model';
 import { TagPoint } from '@/server/models/tag-point.model';
+import { TagProof } from '@/server/models/tag-proof.model';
+import { TagNotice } from '@/server/models/tag-notice.model';
+import { ProcedureReview } from '@/server/models/procedure-review.model';
 import { UserSiteAccess } from '@/server/models/user-site-access.model';
 import { NotificationSetting } from '@/server/models/notification-setting.model';
 import { PasswordToken } from '@/server/models/password-token.model';
@@ -117,6 +120,15 @@ function initModels(sequelize: Sequelize) {
   Tag.belongsTo(User, { foreignKey: 'clearedById', as: 'clearedBy' });
   Tag.hasMany(TagEvent, { foreignKey: 'tagId', as: 'events' });
   TagEvent.belongsTo(User, { foreignKey: 'byId', as: 'by' });
+  TagProof.initModel(sequelize);
+  TagNotice.initModel(sequelize);
+  ProcedureReview.initModel(sequelize);
+  Tag.hasMany(TagProof, { foreignKey: 'tagId', as: 'proofs' });
+  Tag.belongsTo(User, { foreignKey: 'offerToId', as: 'offerTo' });
+  TagProof.belongsTo(User, { foreignKey: 'byId', as: 'by' });
+  TagNotice.belongsTo(User, { foreignKey: 'byId', as: 'by' });
+  TagNotice.belongsTo(Tag, { foreignKey: 'tagId', as: 'tag' });
+  ProcedureReview.belongsTo(User, { foreignKey: 'reviewerId', as: 'reviewer' });
 
   Connection.initModel(sequelize);
   Connection.belongsTo(Asset, { foreignKey: 'fromAssetId', as: 'fromAsset' });

@@ -8,7 +8,7 @@ import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { BoardActions } from '@/components/board/board-actions';
 import { BoardCards } from '@/components/board/board-cards';
-import { BoardCounts } from '@/components/board/board-counts';
+import { BoardCounts, BoardReviewsOverdue } from '@/components/board/board-counts';
 import { BoardFilters, NO_BOARD_FILTERS, type BoardFilterState } from '@/components/board/board-filters';
 import { BoardTable } from '@/components/board/board-table';
 import { useBoardHolders } from '@/components/board/use-board-holders';
@@ -39,12 +39,12 @@ export default function BoardScreen() {
     q: q || undefined,
     siteId: filters.siteId ?? undefined,
     kind: filters.kind ?? undefined,
-    authorId: filters.authorId ?? undefined,
+    holderId: filters.holderId ?? undefined,
     state: filters.state ?? undefined,
     sort: `${sort.dir === 'desc' ? '-' : ''}${sort.key}`,
     page: isWide ? page : 1,
     pageSize: isWide ? TABLE_PAGE : phoneCount,
-  }), [q, filters.siteId, filters.kind, filters.authorId, filters.state, sort, page, phoneCount, isWide]);
+  }), [q, filters.siteId, filters.kind, filters.holderId, filters.state, sort, page, phoneCount, isWide]);
   const board = useBoardQuery(query);
   const sites = useSitesQuery();
   const holders = useBoardHolders(board.data?.items ?? []);
@@ -83,6 +83,7 @@ export default function BoardScreen() {
             onState={(state) => change({ ...filters, state })}
           />
         ) : null}
+        {data ? <BoardReviewsOverdue sites={data.reviewsOverdue} /> : null}
         <BoardFilters value={filters} onChange={change} sites={(sites.data?.items ?? []).map((s) => ({ value: s.id, label: s.name }))} holders={holders} />
         {!data ? (
           board.isPending ? <LoadingView /> : null

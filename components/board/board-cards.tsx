@@ -48,7 +48,7 @@ function BoardCard({ row, now }: { row: BoardRow; now: Date }) {
           </View>
           <Text variant="small" muted>{`${kind.word} · ${row.siteName}${row.plantRoomName ? ` · ${row.plantRoomName}` : ''}`}</Text>
           <Text numberOfLines={3}>{row.reason}</Text>
-          <BoardStateMark state={row.state} />
+          <BoardStateMark state={row.state} proved={row.proved} />
           <Text variant="small" bold>{expiryPhrase(row.expiresAt, now)}</Text>
           <Text variant="small" muted>{`Expires ${formatInZone(row.expiresAt, row.timeZone, now)}`}</Text>
           <Text variant="small" muted>{`Raised ${formatInZone(row.raisedAt, row.timeZone, now)}`}</Text>

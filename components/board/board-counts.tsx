@@ -2,6 +2,7 @@ import { MaterialCommunityIcons } from '@expo/vector-icons';
 import type { ComponentProps } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, layout, radius, space } from '@/components/theme';
+import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { BOARD_STATE_LOOK } from '@/components/board/board-vocabulary';
 import type { BoardState } from '@/shared/rules/board';
@@ -26,6 +27,12 @@ export function BoardCounts({ counts, siteId, state, onSite, onState }: Props) {
         <Tile label="Overdue" value={counts.overdue} icon={BOARD_STATE_LOOK.overdue.icon} alert={counts.overdue > 0} selected={state === 'overdue'} onPress={() => onState(state === 'overdue' ? null : 'overdue')} testID="count-overdue" />
         <Tile label="Due within 24 h" value={counts.dueSoon} icon={BOARD_STATE_LOOK['due-soon'].icon} selected={state === 'due-soon'} onPress={() => onState(state === 'due-soon' ? null : 'due-soon')} testID="count-due-soon" />
       </View>
+      {counts.notProved ? (
+        <View style={styles.notProved} testID="count-not-proved">
+          <MaterialCommunityIcons name="alert" size={20} color={colors.cautionInk} />
+          <Text variant="label" bold style={{ color: colors.cautionInk }}>{`Not proved: ${counts.notProved} live isolation${counts.notProved === 1 ? '' : 's'} with no proof of isolation recorded`}</Text>
+        </View>
+      ) : null}
       {counts.perSite.length ? (
         <View style={styles.sites} role="list" aria-label="Live tags per site">
           {counts.perSite.map((s) => {
@@ -76,6 +83,7 @@ function Tile({ label, value, icon, selected, alert, onPress, testID }: { label:
 }
 
 const styles = StyleSheet.create({
+  notProved: { flexDirection: 'row', alignItems: 'center', gap: space.sm, padding: space.sm, borderRadius: radius.md, borderWidth: 2, borderColor: colors.caution, backgroundColor: colors.cautionSoft },
   tiles: { flexDirection: 'row', gap: space.sm },
   tile: { flex: 1, minHeight: layout.minTouch, padding: space.sm, gap: 2, borderRadius: radius.md, borderWidth: 2, borderColor: colors.line, backgroundColor: colors.surface },
   tileAlert: { backgroundColor: colors.mandatory, borderColor: colors.mandatory },
@@ -85,3 +93,15 @@ const styles = StyleSheet.create({
   site: { flexDirection: 'row', alignItems: 'center', gap: space.xs, minHeight: layout.minTouch, paddingHorizontal: space.md, borderRadius: radius.pill, borderWidth: 2, borderColor: colors.ink, backgroundColor: colors.surface, maxWidth: '100%' },
   siteOn: { backgroundColor: colors.brand, borderColor: colors.brand },
 });
+
+/** Sites whose yearly review of the isolation procedure is overdue (OSHA 29 CFR 1910.147(c)(6)). */
+export function BoardReviewsOverdue({ sites }: { sites: BoardResponse['reviewsOverdue'] }) {
+  if (!sites.length) return null;
+  return (
+    <View testID="board-reviews-overdue">
+      <Notice tone="caution" word="Review overdue">
+        {`Isolation procedure review more than 12 months old: ${sites.map((s) => `${s.siteName} (${s.lastReviewedOn ? `last ${s.lastReviewedOn}` : 'none recorded'})`).join('; ')}.`}
+      </Notice>
+    </View>
+  );
+}

@@ -11,11 +11,11 @@ export interface BoardFilterState {
   q: string;
   siteId: number | null;
   kind: TagKind | null;
-  authorId: number | null;
+  holderId: number | null;
   state: BoardState | null;
 }
 
-export const NO_BOARD_FILTERS: BoardFilterState = { q: '', siteId: null, kind: null, authorId: null, state: null };
+export const NO_BOARD_FILTERS: BoardFilterState = { q: '', siteId: null, kind: null, holderId: null, state: null };
 
 const KIND_OPTIONS = TAG_KINDS.map((k) => ({ value: k, label: KIND_LOOK[k].word }));
 const STATE_OPTIONS = BOARD_STATES.map((s) => ({ value: s, label: BOARD_STATE_LABELS[s] }));
@@ -53,7 +53,7 @@ export function BoardFilters({ value, onChange, sites, holders }: Props) {
           <SelectField label="Kind" hideLabel value={value.kind} options={KIND_OPTIONS} onChange={(kind) => set({ kind })} placeholder="Both kinds" clearable testID="board-filter-kind" />
         </View>
         <View style={{ flexGrow: 1, flexBasis: basis }}>
-          <SelectField label="Holder" hideLabel value={value.authorId} options={holders} onChange={(authorId) => set({ authorId })} placeholder="Any holder" clearable testID="board-filter-holder" />
+          <SelectField label="Holder" hideLabel value={value.holderId} options={holders} onChange={(holderId) => set({ holderId })} placeholder="Any holder" clearable testID="board-filter-holder" />
         </View>
         <View style={{ flexGrow: 1, flexBasis: basis }}>
           <SelectField label="State" hideLabel value={value.state} options={STATE_OPTIONS} onChange={(state) => set({ state })} placeholder="Every state" clearable testID="board-filter-state" />

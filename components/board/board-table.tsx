@@ -46,7 +46,7 @@ export function BoardTable({ rows, now, sort, onSort, paging, busy }: Props) {
       ),
     },
     { key: 'reason', title: 'Reason', flex: 1.8, sortable: true, render: (r) => <Text variant="small" numberOfLines={3}>{r.reason}</Text> },
-    { key: 'author', title: 'Holder', flex: 1.3, sortable: true, render: (r) => <HolderContact row={r} /> },
+    { key: 'holder', title: 'Holder', flex: 1.3, sortable: true, render: (r) => <HolderContact row={r} /> },
     { key: 'raised', title: 'Raised', flex: 1.3, sortable: true, render: (r) => <SiteTime iso={r.raisedAt} timeZone={r.timeZone} now={now} /> },
     {
       key: 'expires', title: 'Expires', flex: 1.4, sortable: true,
@@ -57,7 +57,7 @@ export function BoardTable({ rows, now, sort, onSort, paging, busy }: Props) {
         </View>
       ),
     },
-    { key: 'state', title: 'State', width: 178, sortable: true, render: (r) => <BoardStateMark state={r.state} testID={`board-state-${r.id}`} /> },
+    { key: 'state', title: 'State', width: 178, sortable: true, render: (r) => <BoardStateMark state={r.state} proved={r.proved} testID={`board-state-${r.id}`} /> },
   ];
   return (
     <DataTable

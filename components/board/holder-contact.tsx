@@ -6,15 +6,15 @@ import { telHref } from '@/components/board/board-vocabulary';
 import type { BoardRow } from '@/shared/types/board';
 
 /** The holder's name and, when the tag carries one, their phone number as a tap-to-call link. */
-export function HolderContact({ row, testID }: { row: Pick<BoardRow, 'id' | 'author' | 'contactPhone'>; testID?: string }) {
+export function HolderContact({ row, testID }: { row: Pick<BoardRow, 'id' | 'holder' | 'contactPhone'>; testID?: string }) {
   const phone = row.contactPhone.trim();
   return (
     <View style={{ gap: 2 }}>
-      <Text variant="small" bold numberOfLines={2}>{row.author.name}</Text>
+      <Text variant="small" bold numberOfLines={2}>{row.holder.name}</Text>
       {phone ? (
         <Pressable
           accessibilityRole="link"
-          accessibilityLabel={`Call ${row.author.name} on ${phone}`}
+          accessibilityLabel={`Call ${row.holder.name} on ${phone}`}
           // A call must not also open the tag behind it.
           onPress={(e) => { e.stopPropagation?.(); void Linking.openURL(telHref(phone)); }}
           style={styles.call}

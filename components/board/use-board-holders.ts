@@ -15,10 +15,10 @@ export function useBoardHolders(rows: BoardRow[]): SelectOption<number>[] {
   useEffect(() => {
     if (supervisory) return;
     setSeen((prev) => {
-      const fresh = rows.filter((r) => !prev.has(r.author.id));
+      const fresh = rows.filter((r) => !prev.has(r.holder.id));
       if (!fresh.length) return prev;
       const next = new Map(prev);
-      for (const r of fresh) next.set(r.author.id, r.author.name);
+      for (const r of fresh) next.set(r.holder.id, r.holder.name);
       return next;
     });
   }, [rows, supervisory]);

@@ -17,10 +17,13 @@ export interface FormStatus {
  */
 export const prepareValues = <T extends object>(values: T) => prepareDataForValidation(values as never) as T;
 
+/** A form whose field names differ from the API's (a number typed in a unit) maps each API path to its own. */
+export type FieldPathMap = (apiPath: string) => string;
+
 /** Flat field messages (`attributes.capacityL`, `points[0].method`) as Formik's nested errors. */
-export function nestErrors<T>(fields: FieldErrors): FormikErrors<T> {
+export function nestErrors<T>(fields: FieldErrors, pathFor: FieldPathMap = (p) => p): FormikErrors<T> {
   let nested: FormikErrors<T> = {};
-  for (const [path, message] of Object.entries(fields)) nested = setIn(nested, path, message);
+  for (const [path, message] of Object.entries(fields)) nested = setIn(nested, pathFor(path), message);
   return nested;
 }
 
@@ -34,8 +37,8 @@ export function failureStatus(err: unknown): FormStatus {
 type Helpers<T> = Pick<FormikHelpers<T>, 'setErrors' | 'setStatus'>;
 
 /** A failure into the form: field messages beside their fields, everything in the status banner. */
-export function applyFailure<T>(err: unknown, { setErrors, setStatus }: Helpers<T>) {
-  if (err instanceof RequestError && err.fields) setErrors(nestErrors<T>(err.fields));
+export function applyFailure<T>(err: unknown, { setErrors, setStatus }: Helpers<T>, pathFor?: FieldPathMap) {
+  if (err instanceof RequestError && err.fields) setErrors(nestErrors<T>(err.fields, pathFor));
   setStatus(failureStatus(err));
 }
 
@@ -44,12 +47,12 @@ export function applyFailure<T>(err: unknown, { setErrors, setStatus }: Helpers<
  * maps `error.fields` to the fields and the rest to the banner. Answers the action's result, or undefined.
  *   onSubmit={(values, helpers) => submitForm(helpers, () => invite.mutateAsync(values))}
  */
-export async function submitForm<T, R>(helpers: Helpers<T>, action: () => Promise<R>): Promise<R | undefined> {
+export async function submitForm<T, R>(helpers: Helpers<T>, action: () => Promise<R>, pathFor?: FieldPathMap): Promise<R | undefined> {
   helpers.setStatus(undefined);
   try {
     return await action();
   } catch (err) {
-    applyFailure(err, helpers);
+    applyFailure(err, helpers, pathFor);
     return undefined;
   }
 }

@@ -18,7 +18,7 @@ export function PointWarning({ point, tag }: { point: TagPoint; tag: Tag }) {
         <MaterialCommunityIcons name="hand-back-left-off" size={22} color={colors.danger} />
         <View style={{ flex: 1 }}>
           <Text variant="small" bold>{`${point.asset.plantId} · ${point.asset.name} (${ISOLATION_METHOD_LABELS[point.method].toLowerCase()})`}</Text>
-          <Text variant="small">{pointWarningText(tag.asset.plantId, tag.author.name)}</Text>
+          <Text variant="small">{pointWarningText(tag.asset.plantId, tag.holder.name)}</Text>
         </View>
       </Pressable>
     </Link>

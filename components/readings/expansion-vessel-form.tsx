@@ -4,6 +4,7 @@ import { useMemo, useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { ValidationError } from 'yup';
 import { initialVesselForm, vesselFormPath, vesselFormToRequest, type VesselFormValues } from '@/components/readings/expansion-vessel-fields';
+import { GlycolChoice } from '@/components/readings/glycol-choice';
 import { ExpansionVesselResultView } from '@/components/readings/expansion-vessel-result';
 import { MarginChoice } from '@/components/readings/margin-choice';
 import { MeasurementField } from '@/components/readings/measurement-field';
@@ -12,11 +13,11 @@ import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { RequestError, errorMessage } from '@/hooks/api/request';
+import { FormStatusBanner } from '@/components/forms/status-banner';
+import { submitForm } from '@/components/forms/submit';
 import { useExpansionVesselCheckMutation } from '@/hooks/api/use-calc';
 import { Chip } from '@/components/ui/chip';
-import { SelectField } from '@/components/ui/select-field';
-import { GLYCOL_KINDS, GLYCOL_LABELS, GLYCOL_SOURCE, UNIT_OPTIONS, type ExpansionVesselInputs } from '@/shared/calc';
+import { GLYCOL_SOURCE, UNIT_OPTIONS, type ExpansionVesselInputs } from '@/shared/calc';
 import { expansionVesselRequestSchema, type ExpansionVesselRequest } from '@/shared/schemas/readings';
 
 type Errors = FormikErrors<VesselFormValues>;
@@ -24,7 +25,6 @@ const LITRES = [{ key: 'L', label: 'L' }];
 const CELSIUS = UNIT_OPTIONS.temperature;
 const METRES = UNIT_OPTIONS.length;
 const PERCENT = UNIT_OPTIONS.percent;
-const GLYCOL_OPTIONS = GLYCOL_KINDS.map((k) => ({ value: k, label: GLYCOL_LABELS[k] }));
 
 async function validateVessel(values: VesselFormValues): Promise<Errors> {
   const { body, unreadable } = vesselFormToRequest(values);
@@ -53,22 +53,12 @@ export function ExpansionVesselForm({ initial, initialMarginBar }: { initial?: P
       initialValues={initialValues}
       enableReinitialize
       validate={validateVessel}
-      onSubmit={async (values, { setErrors, setStatus }) => {
-        setStatus(undefined);
-        try {
-          await check.mutateAsync(vesselFormToRequest(values).body as ExpansionVesselRequest);
-          setCheckedJson(JSON.stringify(values));
-        } catch (err) {
-          if (err instanceof RequestError && err.fields) {
-            let mapped: Errors = {};
-            for (const [p, m] of Object.entries(err.fields)) mapped = setIn(mapped, vesselFormPath(p), m);
-            setErrors(mapped);
-          }
-          setStatus(errorMessage(err));
-        }
+      onSubmit={async (values, helpers) => {
+        const checked = await submitForm(helpers, () => check.mutateAsync(vesselFormToRequest(values).body as ExpansionVesselRequest), vesselFormPath);
+        if (checked) setCheckedJson(JSON.stringify(values));
       }}
     >
-      {({ values, errors, touched, setFieldValue, setFieldTouched, handleSubmit, isSubmitting, submitCount, status }) => {
+      {({ values, errors, touched, setFieldValue, setFieldTouched, handleSubmit, isSubmitting, submitCount }) => {
         const show = (path: string) => (submitCount > 0 || getIn(touched, path) ? (getIn(errors, path) as string | undefined) : undefined);
         const field = (name: keyof VesselFormValues, label: string, units: readonly { key: string; label: string }[], unitField?: keyof VesselFormValues, hint?: string) => (
           <View style={isWide ? styles.fieldWide : undefined}>
@@ -99,16 +89,7 @@ export function ExpansionVesselForm({ initial, initialMarginBar }: { initial?: P
             </View>
             <View style={[isWide && styles.fieldsWide]}>
               <View style={isWide ? styles.fieldWide : styles.gap}>
-                <SelectField
-                  label="Glycol in the system water"
-                  value={values.glycolKind}
-                  options={GLYCOL_OPTIONS}
-                  onChange={(v) => setFieldValue('glycolKind', v)}
-                  placeholder="None (plain water)"
-                  clearable
-                  error={show('glycolKind')}
-                  testID="vessel-glycolKind"
-                />
+                <GlycolChoice value={values.glycolKind} onChange={(v) => setFieldValue('glycolKind', v)} error={show('glycolKind')} testID="vessel-glycolKind" />
               </View>
               {values.glycolKind ? field('glycolPercent', 'Glycol concentration (by mass)', PERCENT, undefined, GLYCOL_SOURCE) : null}
               {field('measuredPressure', 'Pressure read at the vessel (optional)', UNIT_OPTIONS.pressure, 'measuredPressureUnit', 'Compared with the final design pressure and the safety valve setting.')}
@@ -142,7 +123,7 @@ export function ExpansionVesselForm({ initial, initialMarginBar }: { initial?: P
               <Button title="Add a vessel" variant="secondary" onPress={() => setFieldValue('vessels', [...values.vessels, ''])} testID="vessel-add" />
             </View>
             <MarginChoice value={values.preChargeMarginBar} onChange={(v) => setFieldValue('preChargeMarginBar', v)} />
-            {status ? <Notice tone="danger" word="Not checked">{status}</Notice> : null}
+            <FormStatusBanner word="Not checked" />
             <Button title={values.sizeOnly ? 'Size the vessel' : 'Check the vessel size'} onPress={() => handleSubmit()} busy={isSubmitting} testID="vessel-check" />
             {stale ? <Notice tone="info" word="Inputs changed">The result below is for the previous inputs. Check again to update it.</Notice> : null}
             {check.data ? <ExpansionVesselResultView result={check.data.result} settings={check.data.settings} /> : null}

@@ -14,7 +14,8 @@ const fmt = (v: number | null, unit: string) => (v === null ? '—' : `${formatN
 export function ExpansionVesselResultView({ result, settings, workingOpen = true }: { result: ExpansionVesselResult; settings: ExpansionSettingsUsed; workingOpen?: boolean }) {
   const { isWide } = useBreakpoints();
   const [showWorking, setShowWorking] = useState(workingOpen);
-  const figures: [string, string][] = [
+  const sized = result.verdict === 'sized';
+  const all: [string, string][] = [
     ['Required nominal volume', fmt(result.requiredNominalVolumeL, 'L')],
     ['Installed nominal volume', fmt(result.installedNominalVolumeL, 'L')],
     ['Expansion volume', fmt(result.expansionVolumeL, 'L')],
@@ -25,9 +26,11 @@ export function ExpansionVesselResultView({ result, settings, workingOpen = true
     ['Final pressure', fmt(result.finalPressureBarGauge, 'bar')],
     ['Cold fill pressure with installed vessels', fmt(result.fillPressureBarGauge, 'bar')],
   ];
+  // Size only: there is no installed vessel to show.
+  const figures = sized ? all.filter(([label]) => !/installed/i.test(label)) : all;
   return (
     <View style={{ gap: space.md }} testID="vessel-result">
-      {result.verdict === 'sized' ? (
+      {sized ? (
         <Notice tone="info" word="Sized" title={`a vessel of at least ${fmt(result.requiredNominalVolumeL, 'L')}`}>
           {`Pre-charge it to ${fmt(result.preChargeBarGauge, 'bar')} and fill cold to about ${fmt(result.fillPressureAtRequiredVolumeBarGauge, 'bar')}. ` +
             'Size only: no installed vessel was checked.'}

@@ -3,7 +3,7 @@ import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { AnyObjectSchema } from 'yup';
 import { FormStatusBanner } from '@/components/forms/status-banner';
-import { submitForm, validateWithSchema } from '@/components/forms/submit';
+import { nestErrors, submitForm } from '@/components/forms/submit';
 import { CheckResults } from '@/components/readings/check-results';
 import { formPathFor, initialReadingForm, readingFormToSi, type ReadingFormValues } from '@/components/readings/reading-fields';
 import { ReadingSectionFields } from '@/components/readings/reading-section-fields';
@@ -17,31 +17,17 @@ import { TextField } from '@/components/ui/text-field';
 import { useCorrectReadingMutation, useLogReadingsMutation } from '@/hooks/api/use-readings';
 import { READING_SECTIONS, readingSectionsFor } from '@/shared/rules/reading-sections';
 import { emptyReadingValues, runReadingChecks } from '@/shared/rules/readings';
+import { validateFields } from '@/shared/schemas/field-errors';
 import { readingCorrectionSchema, readingSetSchema, type ReadingCorrectionInput, type ReadingSetInput } from '@/shared/schemas/readings';
 import type { CheckSettings, ReadingSet, ReadingValues } from '@/shared/types/readings';
 import type { Asset } from '@/shared/types/register';
 
 type Errors = FormikErrors<ReadingFormValues> & { _?: string };
 
-/** Errors named by the API's keys (flowTemperatureC, surfaceTemperatures.0.location) moved onto the form's fields. */
-function onFormFields(nested: object): Errors {
-  let errors: Errors = {};
-  const walk = (value: unknown, path: string) => {
-    if (typeof value === 'string') {
-      const target = formPathFor(path);
-      if (!getIn(errors, target)) errors = setIn(errors, target, value);
-    } else if (value && typeof value === 'object') {
-      for (const [k, v] of Object.entries(value)) walk(v, path ? `${path}.${k}` : k);
-    }
-  };
-  walk(nested, '');
-  return errors;
-}
-
 /** The shared schema on the SI body, as the server runs it; entries that are not numbers are named too. */
 async function validateReadings(values: ReadingFormValues, schema: AnyObjectSchema): Promise<Errors> {
-  const { unreadable } = readingFormToSi(values);
-  let errors = onFormFields(await validateWithSchema<ReadingFormValues>(schema, (v) => readingFormToSi(v).body)(values));
+  const { body, unreadable } = readingFormToSi(values);
+  let errors: Errors = nestErrors<ReadingFormValues>(await validateFields(schema, body), formPathFor);
   for (const [path, message] of Object.entries(unreadable)) errors = setIn(errors, path, message);
   return errors;
 }
@@ -77,12 +63,12 @@ export function ReadingsForm({ asset, checkSettings, correcting, onDone, onCance
     <Formik<ReadingFormValues>
       initialValues={initialValues}
       validate={(values) => validateReadings(values, schema)}
-      onSubmit={async (values, { setErrors, setStatus }) => {
+      onSubmit={async (values, helpers) => {
         const { body } = readingFormToSi(values);
-        const saved = await submitForm({ setErrors: (e) => setErrors(onFormFields(e)), setStatus }, () =>
-          correcting
-            ? correct.mutateAsync({ readingId: correcting.id, input: body as ReadingCorrectionInput })
-            : log.mutateAsync(body as ReadingSetInput),
+        const saved = await submitForm(
+          helpers,
+          () => (correcting ? correct.mutateAsync({ readingId: correcting.id, input: body as ReadingCorrectionInput }) : log.mutateAsync(body as ReadingSetInput)),
+          formPathFor,
         );
         if (saved) onDone(saved);
       }}

@@ -1,6 +1,7 @@
 import { Formik, setIn, type FormikErrors } from 'formik';
 import { StyleSheet, View } from 'react-native';
 import { ValidationError } from 'yup';
+import { GlycolChoice } from '@/components/readings/glycol-choice';
 import { MarginChoice } from '@/components/readings/margin-choice';
 import { MeasurementField, type UnitOption } from '@/components/readings/measurement-field';
 import { defaultUnit, entryToSi, parseEntry, siToEntry } from '@/components/readings/reading-fields';
@@ -8,10 +9,10 @@ import { space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { RequestError, errorMessage } from '@/hooks/api/request';
+import { FormStatusBanner } from '@/components/forms/status-banner';
+import { submitForm } from '@/components/forms/submit';
 import { useSaveHeatingSystemMutation } from '@/hooks/api/use-heating-systems';
-import { SelectField } from '@/components/ui/select-field';
-import { formatNumber, GLYCOL_KINDS, GLYCOL_LABELS, UNIT_OPTIONS, type GlycolKind, type PhysicalQuantity } from '@/shared/calc';
+import { formatNumber, UNIT_OPTIONS, type GlycolKind, type PhysicalQuantity } from '@/shared/calc';
 import { heatingSystemSchema, type HeatingSystemInput } from '@/shared/schemas/readings';
 import type { HeatingSystem } from '@/shared/types/readings';
 
@@ -39,7 +40,6 @@ const FIELDS: FieldDef[] = [
   { key: 'compensationOutsideHighC', label: 'Compensation: mild-day outside temperature', quantity: 'temperature' },
   { key: 'compensationFlowAtHighC', label: 'Compensation: flow on the mild day', quantity: 'temperature' },
 ];
-const GLYCOL_OPTIONS = GLYCOL_KINDS.map((k) => ({ value: k, label: GLYCOL_LABELS[k] }));
 const KELVIN: UnitOption[] = [{ key: 'K', label: 'K' }];
 
 interface Values {
@@ -93,22 +93,12 @@ export function SystemSettingsForm({ system, onDone }: { system: HeatingSystem; 
         for (const [p, m] of Object.entries(unreadable)) errors = setIn(errors, p, m);
         return errors;
       }}
-      onSubmit={async (values, { setErrors, setStatus }) => {
-        setStatus(undefined);
-        try {
-          await save.mutateAsync({ name: system.name, input: toBody(values).body });
-          onDone();
-        } catch (err) {
-          if (err instanceof RequestError && err.fields) {
-            let mapped = {};
-            for (const [p, m] of Object.entries(err.fields)) mapped = setIn(mapped, formPath(p), m);
-            setErrors(mapped);
-          }
-          setStatus(errorMessage(err));
-        }
+      onSubmit={async (values, helpers) => {
+        const saved = await submitForm(helpers, () => save.mutateAsync({ name: system.name, input: toBody(values).body }), formPath);
+        if (saved) onDone();
       }}
     >
-      {({ values, errors, setFieldValue, handleSubmit, isSubmitting, submitCount, status }) => {
+      {({ values, errors, setFieldValue, handleSubmit, isSubmitting, submitCount }) => {
         const errs = errors as FormikErrors<Values> & { _?: string };
         return (
           <View style={{ gap: space.sm }} testID="system-settings-form">
@@ -129,19 +119,10 @@ export function SystemSettingsForm({ system, onDone }: { system: HeatingSystem; 
                 </View>
               ))}
             </View>
-            <SelectField
-              label="Glycol in the system water"
-              value={values.glycolKind}
-              options={GLYCOL_OPTIONS}
-              onChange={(v) => setFieldValue('glycolKind', v)}
-              placeholder="None (plain water)"
-              clearable
-              error={submitCount > 0 && errs.glycolKind}
-              testID="system-glycolKind"
-            />
+            <GlycolChoice value={values.glycolKind} onChange={(v) => setFieldValue('glycolKind', v)} error={submitCount > 0 && errs.glycolKind} testID="system-glycolKind" />
             <MarginChoice value={values.preChargeMarginBar} onChange={(v) => setFieldValue('preChargeMarginBar', v)} />
             {submitCount > 0 && errs._ ? <Notice tone="caution" word="Check">{errs._}</Notice> : null}
-            {status ? <Notice tone="danger" word="Not saved">{status}</Notice> : null}
+            <FormStatusBanner word="Not saved" />
             <Button title="Save system values" onPress={() => handleSubmit()} busy={isSubmitting} testID="system-save" />
           </View>
         );

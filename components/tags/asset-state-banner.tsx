@@ -13,7 +13,8 @@ function detail(s: AssetTagSummary): string {
   if (s.state === 'isolated') {
     const group = s.liveIsolations > 1 ? ' Group isolation: it stays isolated until the last tag is cleared.' : '';
     const overrides = s.liveOverrides ? ` Also ${plural(s.liveOverrides, 'live override', 'live overrides')}.` : '';
-    return `${plural(s.liveIsolations, 'live isolation tag', 'live isolation tags')}. ${STATE_LOOK.isolated.meaning}${group}${overrides}`;
+    const unproved = s.unprovedIsolations ? ` ${s.unprovedIsolations === s.liveIsolations ? 'Not proved' : `${s.unprovedIsolations} not proved`}: no proof of isolation recorded yet.` : '';
+    return `${plural(s.liveIsolations, 'live isolation tag', 'live isolation tags')}. ${STATE_LOOK.isolated.meaning}${group}${overrides}${unproved}`;
   }
   if (s.state === 'overridden') return `${plural(s.liveOverrides, 'live override', 'live overrides')}. ${STATE_LOOK.overridden.meaning}`;
   return STATE_LOOK.normal.meaning;

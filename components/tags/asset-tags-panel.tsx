@@ -30,8 +30,8 @@ export function AssetTagsPanel({ asset }: { asset: Asset }) {
   const [showAll, setShowAll] = useState(false);
   const all = tags.data?.items ?? [];
   const live = all.filter((t) => t.status === 'live');
-  const mine = me ? live.some((t) => t.kind === 'isolation' && t.author.id === me.id) : false;
-  const othersIsolating = live.some((t) => t.kind === 'isolation' && t.author.id !== me?.id);
+  const mine = me ? live.some((t) => t.kind === 'isolation' && t.holder.id === me.id) : false;
+  const othersIsolating = live.some((t) => t.kind === 'isolation' && t.holder.id !== me?.id);
   const canRaise = !!me && mayRaise(me);
   const raise = (kind: 'isolation' | 'override') => router.push({ pathname: '/tags/new', params: { assetId: String(asset.id), kind } });
 

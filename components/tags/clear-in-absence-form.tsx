@@ -11,7 +11,7 @@ import { clearInAbsenceSchema } from '@/shared/schemas/tags';
 import type { Tag } from '@/shared/types/tags';
 
 interface Values {
-  authorNotOnSite: boolean;
+  holderNotOnSite: boolean;
   contactAttempts: string;
   reason: string;
   checks: ChecksValue;
@@ -24,10 +24,10 @@ interface Values {
 export function ClearInAbsenceForm({ tag, onDone, onCancel }: { tag: Tag; onDone: () => void; onCancel?: () => void }) {
   const clear = useClearInAbsenceMutation(tag.id);
   const isolation = tag.kind === 'isolation';
-  const holder = tag.author.name;
+  const holder = tag.holder.name;
   return (
     <Formik<Values>
-      initialValues={{ authorNotOnSite: false, contactAttempts: '', reason: '', checks: noChecks() }}
+      initialValues={{ holderNotOnSite: false, contactAttempts: '', reason: '', checks: noChecks() }}
       validate={async (v) => {
         const errors = await validateWith(clearInAbsenceSchema, v);
         if (isolation) for (const k of RELEASE_CHECKS) if (!v.checks[k]) errors[`checks.${k}`] = 'Confirm this before clearing.';
@@ -52,9 +52,9 @@ export function ClearInAbsenceForm({ tag, onDone, onCancel }: { tag: Tag; onDone
             </Notice>
             <CheckRow
               label={`I have confirmed that ${holder} is not on site`}
-              checked={values.authorNotOnSite}
-              onChange={(v) => void setFieldValue('authorNotOnSite', v)}
-              error={shown.authorNotOnSite}
+              checked={values.holderNotOnSite}
+              onChange={(v) => void setFieldValue('holderNotOnSite', v)}
+              error={shown.holderNotOnSite}
               testID="absence-not-on-site"
             />
             <ReasonField

@@ -93,6 +93,14 @@ export function PointEditor({ index, point, siteId, excludeAssetId, onChange, on
         testID={`${tid}-method`}
       />
       {point.method === 'other' ? <Text variant="small" muted>Say how in the reason or a note.</Text> : null}
+      <TextField
+        label="Lock or tag number at this point (optional)"
+        hint="Only if it differs from your personal lock, e.g. a lock box or a multi-lock hasp number."
+        value={point.lockNumber}
+        onChangeText={(lockNumber) => onChange({ ...point, lockNumber })}
+        autoCapitalize="characters"
+        testID={`${tid}-lock`}
+      />
     </View>
   );
 }

@@ -1,5 +1,6 @@
-import type { EnergySource } from '@/shared/rules/register';
+import { ENERGY_SOURCE_LABELS, type EnergySource } from '@/shared/rules/register';
 import { expiryProblem, type IsolationMethod, type TagKind } from '@/shared/rules/tags';
+import { sourcesNotAccounted, type ProofMethod } from '@/shared/rules/tag-isolation';
 import type { Role } from '@/shared/rules/roles';
 import { raiseTagSchema, type RaiseTagInput } from '@/shared/schemas/tags';
 import { validateWith, type FieldErrors } from '@/components/tags/validate-with';
@@ -10,13 +11,27 @@ export interface PointDraft {
   asset: { id: number; plantId: string; name: string } | null;
   description: string;
   method: IsolationMethod | '';
+  /** This point's own lock or tag number, when it differs from the tag's (a lock box, a hasp). */
+  lockNumber: string;
 }
+
+/** How the isolation was proved, if it has been by the time of raising ('' = not yet: the tag shows "not proved"). */
+export interface ProofDraft {
+  method: ProofMethod | '';
+  instrument: string;
+  reading: string;
+  note: string;
+}
+export const noProof = (): ProofDraft => ({ method: '', instrument: '', reading: '', note: '' });
 
 export interface RaiseValues {
   kind: TagKind;
   reason: string;
   energySources: EnergySource[];
+  /** Why each of the item's sources that is not isolated needs no isolation. */
+  omitted: Partial<Record<EnergySource, string>>;
   points: PointDraft[];
+  proof: ProofDraft;
   lockNumber: string;
   normalState: string;
   leftState: string;
@@ -25,7 +40,7 @@ export interface RaiseValues {
 }
 
 let pointSeq = 0;
-export const newPoint = (asset: PointDraft['asset'] = null): PointDraft => ({ key: `p${++pointSeq}`, asset, description: '', method: '' });
+export const newPoint = (asset: PointDraft['asset'] = null): PointDraft => ({ key: `p${++pointSeq}`, asset, description: '', method: '', lockNumber: '' });
 
 export function initialRaiseValues(kind: TagKind, expiresAt: Date, energySources: EnergySource[]): RaiseValues {
   return {
@@ -33,7 +48,9 @@ export function initialRaiseValues(kind: TagKind, expiresAt: Date, energySources
     reason: '',
     // An item with a single energy source: that is the one being isolated.
     energySources: energySources.length === 1 ? [...energySources] : [],
+    omitted: {},
     points: [newPoint()],
+    proof: noProof(),
     lockNumber: '',
     normalState: '',
     leftState: '',
@@ -42,9 +59,15 @@ export function initialRaiseValues(kind: TagKind, expiresAt: Date, energySources
   };
 }
 
-/** The request body: only the fields of the chosen kind. */
+/** The request body: only the fields of the chosen kind; a reason is sent only for sources not isolated. */
 export function toRaiseInput(v: RaiseValues): RaiseTagInput {
   const isolation = v.kind === 'isolation';
+  const omittedSources = (Object.entries(v.omitted) as [EnergySource, string][])
+    .filter(([source, reason]) => !v.energySources.includes(source) && reason.trim())
+    .map(([source, reason]) => ({ source, reason: reason.trim() }));
+  const proof = isolation && v.proof.method
+    ? { method: v.proof.method, instrument: v.proof.instrument.trim(), reading: v.proof.reading.trim(), note: v.proof.note.trim() }
+    : null;
   return {
     kind: v.kind,
     reason: v.reason.trim(),
@@ -52,15 +75,22 @@ export function toRaiseInput(v: RaiseValues): RaiseTagInput {
     contactPhone: v.contactPhone.trim(),
     lockNumber: v.lockNumber.trim(),
     energySources: isolation ? v.energySources : [],
-    points: isolation ? v.points.map((p) => ({ assetId: p.asset?.id ?? null, description: p.description.trim(), method: (p.method || undefined) as IsolationMethod })) : [],
+    omittedSources: isolation ? omittedSources : [],
+    proof,
+    points: isolation ? v.points.map((p) => ({ assetId: p.asset?.id ?? null, description: p.description.trim(), method: (p.method || undefined) as IsolationMethod, lockNumber: p.lockNumber.trim() })) : [],
     normalState: isolation ? '' : v.normalState.trim(),
     leftState: isolation ? '' : v.leftState.trim(),
   };
 }
 
-/** The shared schema, plus the expiry limits the server applies with its own clock. */
-export async function validateRaise(v: RaiseValues, role: Role): Promise<FieldErrors> {
-  const errors = await validateWith(raiseTagSchema, toRaiseInput(v));
+/** The shared schema, plus the expiry limits and the every-source rule the server applies. */
+export async function validateRaise(v: RaiseValues, role: Role, itemSources: readonly EnergySource[] = []): Promise<FieldErrors> {
+  const input = toRaiseInput(v);
+  const errors = await validateWith(raiseTagSchema, input);
+  if (v.kind === 'isolation' && !errors.energySources) {
+    const missing = sourcesNotAccounted(itemSources, input.energySources, input.omittedSources);
+    if (missing.length) errors.energySources = `Not accounted for: ${missing.map((s) => ENERGY_SOURCE_LABELS[s]).join(', ')}. Isolate each one, or say why it needs no isolation.`;
+  }
   if (!errors.expiresAt) {
     const problem = expiryProblem(new Date(v.expiresAt), new Date(), role);
     if (problem) errors.expiresAt = problem;
@@ -74,7 +104,7 @@ export const RAISE_STEPS = ['What and why', 'Details', 'Expiry and contact', 'Re
 export function stepOf(path: string): number {
   if (path === 'kind' || path === 'reason') return 0;
   if (path === 'expiresAt' || path === 'contactPhone') return 2;
-  if (/^(energySources|points|lockNumber|normalState|leftState)/.test(path)) return 1;
+  if (/^(energySources|omittedSources|points|lockNumber|normalState|leftState|proof)/.test(path)) return 1;
   return 3;
 }
 

@@ -7,9 +7,11 @@ import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { ENERGY_SOURCE_ICONS } from '@/components/register/register-vocabulary';
 import { PointEditor } from '@/components/tags/point-editor';
+import { ProofFields } from '@/components/tags/proof-fields';
 import { newPoint } from '@/components/tags/raise-form-values';
 import type { StepProps } from '@/components/tags/raise-steps-kind';
 import { ENERGY_SOURCE_LABELS } from '@/shared/rules/register';
+import { MIN_OMISSION_REASON } from '@/shared/rules/tag-isolation';
 import type { Asset } from '@/shared/types/register';
 
 const Err = ({ text }: { text?: string }) => (text ? <Text variant="small" style={{ color: colors.danger }}>{`⚠ ${text}`}</Text> : null);
@@ -36,7 +38,17 @@ function IsolationDetails({ values, set, errors, asset }: StepProps & { asset: A
             This item’s record lists no energy sources, so an isolation cannot be recorded against it. Ask for the item’s record to be completed first.
           </Notice>
         )}
-        <Err text={errors.energySources} />
+        {asset.energySources.filter((s) => !values.energySources.includes(s)).map((s) => (
+          <TextField
+            key={s}
+            label={`${ENERGY_SOURCE_LABELS[s]} — not isolated: why is it safe?`}
+            hint={`At least ${MIN_OMISSION_REASON} characters, e.g. “drained down at the valves either side”.`}
+            value={values.omitted[s] ?? ''}
+            onChangeText={(t) => set('omitted', { ...values.omitted, [s]: t })}
+            testID={`omit-${s}`}
+          />
+        ))}
+        <Err text={errors.energySources ?? errors.omittedSources} />
       </View>
       <View style={{ gap: space.sm }}>
         <Text variant="label" bold>Isolation points and methods</Text>
@@ -56,6 +68,10 @@ function IsolationDetails({ values, set, errors, asset }: StepProps & { asset: A
         <Err text={errors.points} />
         <Button title="Add another point" variant="secondary" onPress={() => set('points', [...values.points, newPoint()])} testID="add-point" />
       </View>
+      <Notice tone="mandatory" title="prove it before work">
+        Test for dead with a proved tester, check the gauge reads zero, or try the start controls. A wrong breaker, a back-feed or a passing valve is only found by proving.
+      </Notice>
+      <ProofFields value={values.proof} onChange={(p) => set('proof', p)} errors={errors} optional />
     </View>
   );
 }
@@ -63,7 +79,7 @@ function IsolationDetails({ values, set, errors, asset }: StepProps & { asset: A
 /** Step 2 of an override: the normal state and the state it was left in. */
 function OverrideDetails({ values, set, errors }: StepProps) {
   return (
-    <View>
+    <View style={{ gap: space.sm }}>
       <TextField label="Normal state" hint="e.g. Flow setpoint 80 °C, actuator on auto" value={values.normalState} onChangeText={(t) => set('normalState', t)} error={errors.normalState} testID="raise-normal-state" />
       <TextField label="State it was left in" hint="e.g. Flow setpoint 85 °C, actuator on manual at 40 %" value={values.leftState} onChangeText={(t) => set('leftState', t)} error={errors.leftState} testID="raise-left-state" />
     </View>
@@ -76,8 +92,8 @@ export function DetailsStep(props: StepProps & { asset: Asset }) {
     <View style={{ gap: space.md }}>
       {values.kind === 'isolation' ? <IsolationDetails {...props} /> : <OverrideDetails {...props} />}
       <TextField
-        label="Lock or tag number"
-        hint={values.kind === 'isolation' ? 'The number on your personal lock or tag, if it has one.' : 'Optional.'}
+        label={values.kind === 'isolation' ? 'Your personal lock number' : 'Lock or tag number (optional)'}
+        hint={values.kind === 'isolation' ? 'Required: the number on the lock you have put on. Not a plant or switchgear reference.' : 'Optional.'}
         value={values.lockNumber}
         onChangeText={(t) => set('lockNumber', t)}
         error={errors.lockNumber}

@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { IsolationCautions } from '@/components/tags/isolation-cautions';
+import { IsolationCautions, OverrideCautions } from '@/components/tags/isolation-cautions';
 import { scrollToStart } from '@/components/tags/scroll-to';
 import { withPlan } from '@/components/connections/plan-to-raise';
 import type { IsolationPlan } from '@/shared/types/connections';
@@ -36,7 +36,7 @@ interface Props {
 }
 
 const FIELD_NAMES: [RegExp, string][] = [
-  [/^kind/, 'kind'], [/^reason/, 'reason'], [/^energySources/, 'energy sources'], [/^points/, 'isolation points'],
+  [/^kind/, 'kind'], [/^reason/, 'reason'], [/^(energySources|omittedSources)/, 'energy sources'], [/^points/, 'isolation points'], [/^proof/, 'proof'],
   [/^lockNumber/, 'lock or tag number'], [/^normalState/, 'normal state'], [/^leftState/, 'state it was left in'],
   [/^expiresAt/, 'expiry'], [/^contactPhone/, 'contact phone'],
 ];
@@ -62,7 +62,7 @@ export function RaiseTagForm({ asset, site, me, initialKind, plan, onRaised, onC
   return (
     <Formik<RaiseValues>
       initialValues={initialValues}
-      validate={(v) => validateRaise(v, me.role) as Promise<FormikErrors<RaiseValues>>}
+      validate={(v) => validateRaise(v, me.role, asset.energySources) as Promise<FormikErrors<RaiseValues>>}
       onSubmit={async (values, { setErrors, setStatus }) => {
         setStatus(undefined);
         try {
@@ -105,7 +105,7 @@ export function RaiseTagForm({ asset, site, me, initialKind, plan, onRaised, onC
         const summary = submitCount > 0 ? errorSummary(all) : '';
         const footer = (
           <View style={{ gap: space.md }}>
-            {isolation ? <IsolationCautions /> : <Notice tone="info" word="Remember">Put the item back to its normal state, or hand the tag over, before you leave site. The tag stays on record until someone clears it.</Notice>}
+            {isolation ? <IsolationCautions /> : <OverrideCautions />}
             {status ? <Notice tone="danger" word="Not raised">{status}</Notice> : null}
             {summary && !status ? <Notice tone="danger" word="Check">{summary}</Notice> : null}
           </View>

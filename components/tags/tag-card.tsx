@@ -17,16 +17,17 @@ export function TagCard({ tag, now }: { tag: Tag; now: Date }) {
     <Link href={`/tags/${tag.id}` as never} asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={`${kind.word} tag held by ${tag.author.name}: ${tag.reason}`}
+        accessibilityLabel={`${kind.word} tag held by ${tag.holder.name}: ${tag.reason}`}
         testID={`tag-card-${tag.id}`}
         style={StyleSheet.flatten([styles.card, { borderLeftColor: edge }])}
       >
         <View style={styles.top}>
           <MaterialCommunityIcons name={kind.icon} size={22} color={colors.ink} />
-          <Text bold style={{ flex: 1 }}>{`${kind.word} · ${tag.author.name}`}</Text>
+          <Text bold style={{ flex: 1 }}>{`${kind.word} · ${tag.holder.name}`}</Text>
           <MaterialCommunityIcons name="chevron-right" size={24} color={colors.inkMuted} />
         </View>
         <Text numberOfLines={3}>{tag.reason}</Text>
+        {tag.status === 'live' && tag.proved === false ? <Text variant="small" bold testID={`tag-card-not-proved-${tag.id}`}>⚠ Not proved: no proof of isolation recorded</Text> : null}
         <View style={[styles.expiry, overdue && styles.expiryOverdue]}>
           <MaterialCommunityIcons name={overdue ? STATE_LOOK.overdue.icon : 'calendar-clock'} size={18} color={overdue ? colors.brandInk : colors.ink} />
           <Text variant="small" bold style={{ color: overdue ? colors.brandInk : colors.ink, flexShrink: 1 }}>

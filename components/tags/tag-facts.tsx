@@ -6,7 +6,10 @@ import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import { EnergyChips } from '@/components/register/energy-chips';
 import { METHOD_ICONS } from '@/components/tags/tag-vocabulary';
+import { formatInZone } from '@/components/tags/tag-time';
+import { ENERGY_SOURCE_LABELS } from '@/shared/rules/register';
 import { ISOLATION_METHOD_LABELS } from '@/shared/rules/tags';
+import { PROOF_METHOD_LABELS } from '@/shared/rules/tag-isolation';
 import type { Tag } from '@/shared/types/tags';
 
 /** What the tag records: reason, energy sources and points (isolation) or normal → left state (override). */
@@ -24,6 +27,12 @@ export function TagFacts({ tag }: { tag: Tag }) {
             <Text variant="small" muted>Energy sources isolated</Text>
             <EnergyChips sources={tag.energySources} />
           </View>
+          {tag.omittedSources.length ? (
+            <View style={{ gap: space.xs }} testID="tag-omitted-sources">
+              <Text variant="small" muted>Not isolated, and why</Text>
+              {tag.omittedSources.map((o) => <Text key={o.source}>{`${ENERGY_SOURCE_LABELS[o.source]}: ${o.reason}`}</Text>)}
+            </View>
+          ) : null}
           <View style={{ gap: space.xs }} testID="tag-points">
             <Text variant="small" muted>{`Isolation points (${tag.points.length})`}</Text>
             {tag.points.map((p) => (
@@ -39,9 +48,25 @@ export function TagFacts({ tag }: { tag: Tag }) {
                   ) : <Text bold>{p.description}</Text>}
                   {p.asset && p.description ? <Text variant="small">{p.description}</Text> : null}
                   <Text variant="small">{ISOLATION_METHOD_LABELS[p.method]}</Text>
+                  {p.lockNumber ? <Text variant="small" bold>{`Lock at this point: ${p.lockNumber}`}</Text> : null}
                 </View>
               </View>
             ))}
+          </View>
+          <View style={{ gap: space.xs }} testID="tag-proofs">
+            <Text variant="small" muted>Proof of isolation</Text>
+            {tag.proofs.length ? tag.proofs.map((p) => (
+              <View key={p.id} style={styles.point}>
+                <MaterialCommunityIcons name="check-decagram-outline" size={24} color={colors.safe} />
+                <View style={{ flex: 1 }}>
+                  <Text bold>{`Proved · ${PROOF_METHOD_LABELS[p.method]}`}</Text>
+                  {p.instrument ? <Text variant="small">{`With: ${p.instrument}`}</Text> : null}
+                  {p.reading ? <Text variant="small">{`Reading: ${p.reading}`}</Text> : null}
+                  {p.note ? <Text variant="small">{p.note}</Text> : null}
+                  <Text variant="small" muted>{`${p.by.name} · ${formatInZone(p.at, tag.asset.timeZone, new Date())}`}</Text>
+                </View>
+              </View>
+            )) : <Text bold>Not proved: no proof recorded.</Text>}
           </View>
         </>
       ) : (
@@ -59,7 +84,7 @@ export function TagFacts({ tag }: { tag: Tag }) {
       )}
       {tag.lockNumber ? (
         <View>
-          <Text variant="small" muted>Lock or tag number</Text>
+          <Text variant="small" muted>{tag.kind === 'isolation' ? 'Holder’s lock number' : 'Lock or tag number'}</Text>
           <Text bold>{tag.lockNumber}</Text>
         </View>
       ) : null}

@@ -4,6 +4,7 @@ import type { ComponentProps, ReactNode } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, layout, radius, space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
+import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { expiryPhrase, formatInZone } from '@/components/tags/tag-time';
 import { KIND_LOOK, STATE_LOOK, TONE_COLORS } from '@/components/tags/tag-vocabulary';
@@ -51,6 +52,11 @@ export function TagHeader({ tag, now }: { tag: Tag; now: Date }) {
           <Text bold style={{ color: colors.brandInk, flex: 1 }}>{`${capitalise(expiryPhrase(tag.expiresAt, now))}. It stays in force until a person clears it; the holder should clear or extend it.`}</Text>
         </View>
       ) : null}
+      {tag.status === 'live' && tag.proved === false ? (
+        <View style={styles.notProved} testID="tag-not-proved">
+          <Notice tone="caution" word="Not proved">No proof of this isolation is recorded yet. Prove it dead before any work starts, then record how.</Notice>
+        </View>
+      ) : null}
       <View style={[styles.body, isWide && styles.bodyWide]}>
         <Line wide={isWide} icon="map-marker-outline" label="Item">
           <Link href={`/assets/${tag.asset.id}` as never} asChild>
@@ -61,10 +67,10 @@ export function TagHeader({ tag, now }: { tag: Tag; now: Date }) {
           <Text variant="small" muted>{[tag.asset.siteName, tag.asset.plantRoomName].filter(Boolean).join(' · ')}</Text>
         </Line>
         <Line wide={isWide} icon="account-hard-hat" label={tag.status === 'live' ? 'Held by' : 'Was held by'}>
-          <Text bold testID="tag-holder">{tag.author.name}</Text>
+          <Text bold testID="tag-holder">{tag.holder.name}</Text>
           {tag.contactPhone && tag.status === 'live' ? (
             <Link href={telHref(tag.contactPhone) as never} asChild>
-              <Pressable accessibilityRole="link" accessibilityLabel={`Call ${tag.author.name} on ${tag.contactPhone}`} style={StyleSheet.flatten([styles.link, styles.call])} testID="tag-call">
+              <Pressable accessibilityRole="link" accessibilityLabel={`Call ${tag.holder.name} on ${tag.contactPhone}`} style={StyleSheet.flatten([styles.link, styles.call])} testID="tag-call">
                 <MaterialCommunityIcons name="phone" size={20} color={colors.brand} />
                 <Text bold style={styles.linkText}>{`Call ${tag.contactPhone}`}</Text>
               </Pressable>
@@ -86,6 +92,7 @@ export function TagHeader({ tag, now }: { tag: Tag; now: Date }) {
 }
 
 const styles = StyleSheet.create({
+  notProved: { padding: space.sm },
   frame: { borderWidth: 3, borderRadius: radius.lg, overflow: 'hidden', backgroundColor: colors.surface },
   plate: { flexDirection: 'row', alignItems: 'center', gap: space.md, padding: space.md },
   overdue: { flexDirection: 'row', alignItems: 'center', gap: space.sm, padding: space.md, backgroundColor: colors.mandatory },

@@ -28,7 +28,7 @@ export function TagHistoryList({ tags, now, limit }: { tags: Tag[]; now: Date; l
                 <Text bold>{`${kind.word} · ${state.word}`}</Text>
                 <Text numberOfLines={2}>{tag.reason}</Text>
                 <Text variant="small" muted>{`Raised by ${tag.raisedBy.name}, ${formatInZone(tag.raisedAt, tz, now)}`}</Text>
-                {tag.author.id !== tag.raisedBy.id ? <Text variant="small" muted>{`Held by ${tag.author.name}`}</Text> : null}
+                {tag.holder.id !== tag.raisedBy.id ? <Text variant="small" muted>{`Held by ${tag.holder.name}`}</Text> : null}
                 {tag.clearedAt ? <Text variant="small" muted>{`Cleared by ${tag.clearedBy?.name ?? 'Unknown'}, ${formatInZone(tag.clearedAt, tz, now)}`}</Text> : null}
               </View>
             </Pressable>

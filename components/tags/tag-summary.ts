@@ -1,7 +1,7 @@
 import { assetStateFromTags, type AssetTagSummary, type TagLike } from '@/shared/rules/tags';
 
 /** Either a summary from the server or the item's live tags; both give the same at-a-glance state. */
-export type StateSource = { summary: AssetTagSummary; tags?: never } | { tags: Pick<TagLike, 'kind' | 'status' | 'expiresAt'>[]; summary?: never };
+export type StateSource = { summary: AssetTagSummary; tags?: never } | { tags: Pick<TagLike, 'kind' | 'status' | 'expiresAt' | 'proved'>[]; summary?: never };
 
 export const summaryOf = (source: StateSource, now: Date): AssetTagSummary => source.summary ?? assetStateFromTags(source.tags, now);
 

@@ -5,6 +5,7 @@ import { Text } from '@/components/ui/text';
 import { formatInZone } from '@/components/tags/tag-time';
 import { EVENT_ICONS } from '@/components/tags/tag-vocabulary';
 import { RELEASE_CHECKS, RELEASE_CHECK_LABELS, TAG_EVENT_LABELS } from '@/shared/rules/tags';
+import { PROOF_METHOD_LABELS, type ProofMethod } from '@/shared/rules/tag-isolation';
 import type { TagEvent } from '@/shared/types/tags';
 
 const str = (v: unknown) => (typeof v === 'string' ? v : '');
@@ -28,19 +29,41 @@ function describe(e: TagEvent, timeZone: string, now: Date): string[] {
       return [str(d.reason), `Expiry ${at(d.expiresAt)}.`].filter(Boolean);
     case 'extended':
       return [`Expiry moved from ${at(d.from)} to ${at(d.to)}.`, str(d.reason) && `Reason: ${str(d.reason)}`].filter(Boolean);
+    case 'proved':
+      return [
+        PROOF_METHOD_LABELS[str(d.method) as ProofMethod] ?? str(d.method),
+        str(d.instrument) && `Instrument or gauge: ${str(d.instrument)}`,
+        str(d.reading) && `Reading: ${str(d.reading)}`,
+        str(d.note),
+      ].filter(Boolean);
+    case 'handover-offered':
+      return [`Offered to ${nameOf(d.to)}; lapses ${at(d.lapsesAt)} unless accepted.`, str(d.note) && `Note: ${str(d.note)}`].filter(Boolean);
+    case 'handover-withdrawn':
+      return [nameOf(d.to) ? `The offer to ${nameOf(d.to)} was withdrawn.` : 'The offer was withdrawn.'];
     case 'handed-over':
       return [
-        `${nameOf(d.from) || 'The holder'} handed over to ${nameOf(d.to) || e.by.name}.`,
-        str(d.lockNumber) && `Lock or tag number ${str(d.lockNumber)}.`,
+        `${nameOf(d.from) || 'The holder'} handed over to ${nameOf(d.to) || e.by.name}, who accepted.`,
+        str(d.lockNumber) && `New lock ${str(d.lockNumber)} on${str(d.fromLockNumber) ? `; ${str(d.fromLockNumber)} to come off` : ''}.`,
         str(d.note) && `Note: ${str(d.note)}`,
       ].filter(Boolean);
+    case 'reassigned-in-absence':
+      return [
+        `Moved from ${nameOf(d.from)} to ${nameOf(d.to)}.`,
+        d.holderNotOnSite === true ? 'The holder was confirmed not on site.' : '',
+        str(d.contactAttempts) && `Attempts to reach them: ${str(d.contactAttempts)}`,
+        str(d.reason) && `Reason: ${str(d.reason)}`,
+        str(d.lockNumber) && `New lock ${str(d.lockNumber)}.`,
+        'The holder is told and must acknowledge before they resume work.',
+      ].filter(Boolean);
+    case 'acknowledged':
+      return ['The holder read what happened in their absence and acknowledged it.'];
     case 'note-added':
       return [str(d.text)];
     case 'cleared':
       return [str(d.reason) && `Reason: ${str(d.reason)}`, checksLine(d.checks) ?? ''].filter(Boolean);
     case 'cleared-in-absence':
       return [
-        d.authorNotOnSite === true ? 'The holder was confirmed not on site.' : '',
+        (d.holderNotOnSite ?? d.authorNotOnSite) === true ? 'The holder was confirmed not on site.' : '',
         str(d.contactAttempts) && `Attempts to reach them: ${str(d.contactAttempts)}`,
         str(d.reason) && `Reason: ${str(d.reason)}`,
         checksLine(d.checks) ?? '',

@@ -53,8 +53,13 @@ export const METHOD_ICONS: Record<IsolationMethod, IconName> = {
 
 export const EVENT_ICONS: Record<TagEventType, IconName> = {
   raised: 'tag-outline',
+  proved: 'check-decagram-outline',
   extended: 'calendar-clock',
+  'handover-offered': 'account-arrow-right-outline',
+  'handover-withdrawn': 'account-cancel-outline',
   'handed-over': 'account-switch',
+  'reassigned-in-absence': 'account-alert-outline',
+  acknowledged: 'account-check-outline',
   'note-added': 'note-text-outline',
   'photo-added': 'camera-outline',
   cleared: 'lock-open-check-outline',

@@ -53,7 +53,7 @@ export function EndVisitForm({ visit, held, onEnded, onCancel }: { visit: Visit;
         <Notice tone="safe" word="Nothing held">You hold no live tags on this site.</Notice>
       )}
       {held.map((t) => (
-        <DecisionCard key={t.id} tag={t} now={now} draft={drafts[t.id] ?? EMPTY} error={fields[`tags.${t.id}`]} onChange={(d) => setDrafts((all) => ({ ...all, [t.id]: d }))} />
+        <DecisionCard key={t.id} tag={t} now={now} draft={drafts[t.id] ?? EMPTY} error={fields[`tags.${t.id}`]} onChange={(d) => { setDrafts((all) => ({ ...all, [t.id]: d })); setFields(({ [`tags.${t.id}`]: _answered, ...rest }) => rest); }} />
       ))}
       <TextField label="Note on leaving (optional)" value={note} onChangeText={setNote} multiline numberOfLines={3} style={multilineStyle} testID="end-visit-note" />
       <StatusBanner status={status} word={status?.code === 'undecided-tags' ? 'Tags left undecided' : undefined} testID="end-visit-status" />

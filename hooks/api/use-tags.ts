@@ -6,14 +6,18 @@ import { assetKeys } from '@/hooks/api/use-assets';
 import { sendOrQueue } from '@/hooks/offline/send-or-queue';
 import type { OutboxKind } from '@/hooks/offline/outbox-types';
 import type { TagStatus } from '@/shared/rules/tags';
-import type { ClearInAbsenceInput, ClearTagInput, ExtendTagInput, HandoverInput, RaiseTagInput } from '@/shared/schemas/tags';
-import type { Tag } from '@/shared/types/tags';
+import type {
+  ClearInAbsenceInput, ClearTagInput, ExtendTagInput, HandoverAcceptInput, HandoverOfferInput, ProofInput, RaiseTagInput, ReassignInAbsenceInput,
+} from '@/shared/schemas/tags';
+import type { Tag, TagNotice } from '@/shared/types/tags';
 import type { ListResponse } from '@/shared/types/user';
 
 export interface TagFilters {
   assetId?: number;
   siteId?: number;
   status?: TagStatus;
+  /** 'me': live tags a colleague has offered to the caller. */
+  offeredTo?: 'me';
 }
 
 export const tagKeys = {
@@ -21,6 +25,8 @@ export const tagKeys = {
   lists: () => [...tagKeys.all, 'list'] as const,
   list: (filters: TagFilters) => [...tagKeys.lists(), filters] as const,
   detail: (id: number) => [...tagKeys.all, 'detail', id] as const,
+  notices: () => [...tagKeys.all, 'notices'] as const,
+  colleagues: () => [...tagKeys.all, 'colleagues'] as const,
 };
 
 // An item carries tens of tags over its life, not hundreds: one page of the largest size holds its history.
@@ -53,11 +59,22 @@ function useTagChanged() {
   };
 }
 
-/** A key for one raise: sent with every attempt of the same submission so a retry never makes a second tag. */
-export function newIdempotencyKey(): string {
+/**
+ * A key for one submission of a tag action, sent as the `Idempotency-Key` header with every attempt of it, so a
+ * retry never writes a second tag or event; the server refuses the same key with a different request (422).
+ */
+export function newIdempotencyKey(action = 'raise'): string {
   const uuid = globalThis.crypto?.randomUUID?.();
-  if (uuid) return `raise-${uuid}`;
-  return `raise-${Date.now().toString(36)}-${Math.random().toString(36).slice(2)}${Math.random().toString(36).slice(2)}`;
+  if (uuid) return `${action}-${uuid}`;
+  return `${action}-${Date.now().toString(36)}-${Math.random().toString(36).slice(2)}${Math.random().toString(36).slice(2)}`;
+}
+
+/** One key per submitted variables object: react-query passes the same object to every retry of a mutation. */
+const submissionKeys = new WeakMap<object, string>();
+function keyFor(variables: object, action: string): string {
+  let key = submissionKeys.get(variables);
+  if (!key) submissionKeys.set(variables, (key = newIdempotencyKey(action)));
+  return key;
 }
 
 export interface RaiseTagVariables {
@@ -81,28 +98,48 @@ export function useRaiseTagMutation(assetId: number) {
   });
 }
 
-/** A tag action; with no signal it waits in the outbox and the form is told it has not happened yet. */
-function useTagAction<I>(id: number, action: string, kind: OutboxKind, summary: string) {
+/** A tag action; with no signal it waits in the outbox, with its Idempotency-Key, and the form is told it has not happened yet. */
+function useTagAction<I extends object>(id: number, action: string, kind: OutboxKind, summary: string) {
   const changed = useTagChanged();
+  const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: I) => sendOrQueue<Tag>(`/tags/${id}/${action}`, { method: 'POST', body: input }, { kind, summary: `${summary} (tag ${id})`, tagId: id }),
-    onSuccess: changed,
+    mutationFn: (input: I) => sendOrQueue<Tag>(`/tags/${id}/${action}`, { method: 'POST', body: input, headers: { 'Idempotency-Key': keyFor(input, action.replace(/\//g, '-')) } }, { kind, summary: `${summary} (tag ${id})`, tagId: id }),
+    onSuccess: async (tag) => {
+      await changed(tag);
+      await qc.invalidateQueries({ queryKey: tagKeys.notices() });
+    },
   });
 }
 
 export const useClearTagMutation = (id: number) => useTagAction<ClearTagInput>(id, 'clear', 'tag-clear', 'clear the tag');
 export const useClearInAbsenceMutation = (id: number) => useTagAction<ClearInAbsenceInput>(id, 'clear-in-absence', 'tag-clear', 'clear the tag in the holder’s absence');
+export const useReassignInAbsenceMutation = (id: number) => useTagAction<ReassignInAbsenceInput>(id, 'reassign-in-absence', 'tag-handover', 'reassign the tag in the holder’s absence');
 export const useExtendTagMutation = (id: number) => useTagAction<ExtendTagInput>(id, 'extend', 'tag-extend', 'extend the tag');
-/** Called by the on-coming person: they become the holder. */
-export const useHandoverTagMutation = (id: number) => useTagAction<HandoverInput>(id, 'handover', 'tag-handover', 'take over the tag');
+export const useProveTagMutation = (id: number) => useTagAction<ProofInput>(id, 'prove', 'tag-prove', 'record the proof of isolation');
+/** The holder names the colleague who is to take the tag; nothing changes hands until they accept. */
+export const useOfferHandoverMutation = (id: number) => useTagAction<HandoverOfferInput>(id, 'handover', 'tag-handover', 'offer the tag to a colleague');
+/** The named colleague accepts with the number of the lock they have just put on. */
+export const useAcceptHandoverMutation = (id: number) => useTagAction<HandoverAcceptInput>(id, 'handover/accept', 'tag-handover', 'accept the hand-over');
+export const useWithdrawHandoverMutation = (id: number) => useTagAction<Record<string, never>>(id, 'handover/withdraw', 'tag-handover', 'withdraw the hand-over offer');
+export const useAcknowledgeTagMutation = (id: number) => useTagAction<Record<string, never>>(id, 'acknowledge', 'tag-acknowledge', 'acknowledge what happened in your absence');
 export const useAddTagNoteMutation = (id: number) => useTagAction<{ text: string }>(id, 'notes', 'tag-note', 'add a note');
+
+/** Tags cleared or reassigned while the caller was away, not yet acknowledged. */
+export function useTagNoticesQuery(enabled = true) {
+  return useQuery({ queryKey: tagKeys.notices(), queryFn: () => request<TagNotice[]>('/tag-notices'), enabled });
+}
+
+/** Colleagues a tag can be offered or reassigned to. */
+export function useTagColleaguesQuery(enabled = true) {
+  return useQuery({ queryKey: tagKeys.colleagues(), queryFn: () => request<{ id: number; name: string; role: string }[]>('/tag-colleagues'), enabled });
+}
 
 /** A photo of the lock or tag in place, added to a live tag. */
 export function useAddTagPhotoMutation(id: number) {
   const changed = useTagChanged();
   return useMutation({
     mutationFn: (asset: ImagePickerAsset) =>
-      sendOrQueue<Tag>(`/tags/${id}/photos`, { method: 'POST', body: photoFormData(asset) }, { kind: 'tag-photo', summary: `add a photo (tag ${id})`, tagId: id }),
+      sendOrQueue<Tag>(`/tags/${id}/photos`, { method: 'POST', body: photoFormData(asset), headers: { 'Idempotency-Key': keyFor(asset, 'photo') } }, { kind: 'tag-photo', summary: `add a photo (tag ${id})`, tagId: id }),
     onSuccess: changed,
   });
 }

@@ -1,5 +1,5 @@
 /** What can wait on the device for a signal: the actions an engineer takes at the plant. */
-export type OutboxKind = 'raise-tag' | 'tag-note' | 'tag-clear' | 'tag-extend' | 'tag-handover' | 'tag-photo' | 'reading' | 'photo';
+export type OutboxKind = 'raise-tag' | 'tag-note' | 'tag-clear' | 'tag-extend' | 'tag-handover' | 'tag-prove' | 'tag-acknowledge' | 'tag-photo' | 'reading' | 'photo';
 
 /** A form field as stored: text, or a file kept as a Blob (FormData itself cannot be stored). */
 export type StoredFormField = [name: string, value: string | { blob: Blob; fileName: string }];

@@ -19,7 +19,7 @@ export function siteTime(iso: string, timeZone: string): string {
 /** UTF-8 with a byte-order mark so spreadsheet programs read accents; cells guarded against formula injection. */
 export function writeBoardCsv(rows: BoardRow[], publicUrl: string): string {
   const lines = rows.map((r) => [
-    r.siteName, r.plantRoomName ?? '', r.plantId, r.assetName, r.kind, r.reason, r.author.name,
+    r.siteName, r.plantRoomName ?? '', r.plantId, r.assetName, r.kind, r.reason, r.holder.name,
     siteTime(r.raisedAt, r.timeZone), siteTime(r.expiresAt, r.timeZone), r.timeZone, BOARD_STATE_LABELS[r.state], r.contactPhone, `${publicUrl}/tags/${r.id}`,
   ].map(guardCell));
   return `\uFEFF${stringify([[...BOARD_CSV_COLUMNS], ...lines], { record_delimiter: '\r\n' })}`;

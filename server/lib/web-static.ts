@@ -45,7 +45,8 @@ function precompressed(webDir: string) {
       res.setHeader('Vary', 'Accept-Encoding');
       res.type(path.extname(file));
       setCacheHeaders(res, file);
-      return res.sendFile(file + ext, { cacheControl: false, lastModified: true });
+      // The folder itself may sit under a dot-folder; the request path was checked against it above.
+      return res.sendFile(file + ext, { cacheControl: false, lastModified: true, dotfiles: 'allow' });
     }
     next();
   };
@@ -67,7 +68,7 @@ export function webStatic(webDir: string) {
   );
   router.get(/^(?!\/api\/).*/, (_req, res) => {
     res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(path.join(webDir, 'index.html'), { cacheControl: false });
+    res.sendFile(path.join(webDir, 'index.html'), { cacheControl: false, dotfiles: 'allow' });
   });
   return router;
 }

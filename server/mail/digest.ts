@@ -1,6 +1,7 @@
 import os from 'node:os';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { enqueueMail, recipientsWanting } from '@/server/mail/outbox';
+import { overdueReviews } from '@/server/services/procedure-reviews.service';
 import { DIGEST_HOUR, DIGEST_LAST_HOUR } from '@/shared/rules/notifications';
 import { endOfDayInZone, localDate, zonedTimeToUtc } from '@/shared/rules/time-zone';
 import { rolesWith } from '@/shared/rules/permissions';
@@ -61,6 +62,10 @@ export async function runDigests(now: Date, opts: { sequelize: Sequelize; name?:
     const rows = tags.map((t) => ({ ...t, expiresAt: new Date(t.expiresAt).toISOString() }));
     const overdue = rows.filter((t) => Date.parse(t.expiresAt) < now.getTime());
     const dueToday = rows.filter((t) => Date.parse(t.expiresAt) >= now.getTime());
+    // Sites in this zone whose yearly procedure review is overdue (OSHA 29 CFR 1910.147(c)(6)).
+    const zoneSites = (await sequelize.query<{ id: number }>('SELECT id FROM sites WHERE organisation_id = ? AND time_zone = ?', { replacements: [organisationId, timeZone], type: QueryTypes.SELECT })).map((s) => s.id);
+    const reviewsOverdue = await overdueReviews(sequelize, organisationId, zoneSites, now);
+    const itemCount = rows.length + reviewsOverdue.length;
 
     for (const person of due) {
       const claimed = await sequelize.transaction(async (transaction) => {
@@ -70,16 +75,16 @@ export async function runDigests(now: Date, opts: { sequelize: Sequelize; name?:
         );
         if (Number(affected) !== 1) return false;
         // Nothing to report: the run is recorded (so it is not retried all morning) but no e-mail goes.
-        if (rows.length) {
+        if (itemCount) {
           await enqueueMail(sequelize, [{
             organisationId, kind: 'digest', toEmail: person.email, toUserId: person.id,
-            payload: { recipientName: person.name, timeZone, localDate: date, overdue, dueToday },
+            payload: { recipientName: person.name, timeZone, localDate: date, overdue, dueToday, reviewsOverdue },
           }], transaction, now);
         }
         return true;
       });
       if (!claimed) result.skipped += 1;
-      else if (rows.length) result.sent += 1;
+      else if (itemCount) result.sent += 1;
       else result.empty += 1;
     }
   }

@@ -9,6 +9,7 @@ export const MAIL_KINDS = [
   'tag-cleared-in-absence',
   'my-tag-cleared-in-absence',
   'my-tag-handed-over',
+  'my-tag-reassigned-in-absence',
   'digest',
   'invite',
   'password-reset',

@@ -8,7 +8,7 @@ import { User } from '@/server/models/user.model';
 import { enqueueMail, recipientsWanting, type OutboxMail } from '@/server/mail/outbox';
 import { rolesWith } from '@/shared/rules/permissions';
 
-export type TagMailEvent = 'raised' | 'cleared' | 'cleared-in-absence' | 'handed-over';
+export type TagMailEvent = 'raised' | 'cleared' | 'cleared-in-absence' | 'handed-over' | 'reassigned-in-absence';
 
 /** What a tag e-mail shows, frozen when the event happens. */
 export interface TagSnapshot {
@@ -32,7 +32,9 @@ export interface TagSnapshot {
 /**
  * Queues the e-mails a tag event causes, in the event's own transaction:
  * raised / cleared / cleared in absence → supervisors and admins who want them (not the person who did it);
- * cleared in absence / handed over → the person who held the tag, if they want mail about their tags.
+ * handed over → the person who held the tag, if they want mail about their tags;
+ * cleared or reassigned in absence → the person who held the tag, whatever their settings (they must know before
+ * they go back to work), and supervisors and admins who want clearance mail.
  */
 export async function enqueueTagMail(
   event: TagMailEvent,
@@ -69,17 +71,20 @@ export async function enqueueTagMail(
 
   // The person whose tag it was hears about it directly (OSHA 29 CFR 1910.147(e)(3)(iii): the authorized
   // employee is informed that the device was removed before resuming work).
-  const ownerId = event === 'cleared-in-absence' ? tag.holderId : event === 'handed-over' ? extra.previousHolderId : undefined;
+  const inAbsence = event === 'cleared-in-absence' || event === 'reassigned-in-absence';
+  const ownerId = event === 'cleared-in-absence' ? tag.holderId : event === 'handed-over' || event === 'reassigned-in-absence' ? extra.previousHolderId : undefined;
   if (ownerId && ownerId !== actor.id) {
-    const [owner] = await recipientsWanting(sequelize, tag.organisationId, 'my_tags', { userIds: [ownerId], roles: rolesWith('receiveOwnTagMail'), transaction });
+    const owner = inAbsence
+      ? await User.findOne({ where: { id: ownerId, organisationId: tag.organisationId }, transaction })
+      : (await recipientsWanting(sequelize, tag.organisationId, 'my_tags', { userIds: [ownerId], roles: rolesWith('receiveOwnTagMail'), transaction }))[0];
     if (owner) {
       personal.add(owner.id);
-      const kind = event === 'handed-over' ? 'my-tag-handed-over' : 'my-tag-cleared-in-absence';
+      const kind = event === 'handed-over' ? 'my-tag-handed-over' : event === 'reassigned-in-absence' ? 'my-tag-reassigned-in-absence' : 'my-tag-cleared-in-absence';
       mails.push({ organisationId: tag.organisationId, kind, toEmail: owner.email, toUserId: owner.id, payload: { ...base, recipientName: owner.name } });
     }
   }
 
-  if (event !== 'handed-over') {
+  if (event !== 'handed-over' && event !== 'reassigned-in-absence') {
     const setting = event === 'raised' ? 'raised' : 'cleared';
     const kind = event === 'raised' ? 'tag-raised' : event === 'cleared' ? 'tag-cleared' : 'tag-cleared-in-absence';
     const people = await recipientsWanting(sequelize, tag.organisationId, setting, { roles: rolesWith('receiveOrganisationMail'), transaction });

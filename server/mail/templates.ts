@@ -14,7 +14,7 @@ interface TagPayload {
   recipientName: string;
 }
 interface DigestRow { id: number; plantId: string; assetName: string; siteName: string; kind: string; holderName: string; expiresAt: string }
-interface DigestPayload { recipientName: string; timeZone: string; localDate: string; overdue: DigestRow[]; dueToday: DigestRow[] }
+interface DigestPayload { recipientName: string; timeZone: string; localDate: string; overdue: DigestRow[]; dueToday: DigestRow[]; reviewsOverdue?: { siteId: number; siteName: string; lastReviewedOn: string | null }[] }
 interface LinkPayload { recipientName: string; token: string; expiresAt: string; invitedBy?: string; organisationName?: string }
 
 const kindWord = (kind: string) => (kind === 'override' ? 'Override' : 'Isolation');
@@ -56,11 +56,18 @@ function tagMail(kind: MailKind, p: TagPayload, url: (path: string) => string): 
         { p: `${p.recipientName}, ${p.actor.name} cleared your ${word.toLowerCase()} tag while you were not on site.` },
         { facts: [['Clearance reason', p.reason ?? '—']] }, tagFacts(t), ...links,
         // OSHA 29 CFR 1910.147(e)(3)(iii): the employee is to be told the device was removed before resuming work.
-        { caution: `Do not resume work on this item until you have spoken to ${p.actor.name} and re-isolated it under your site procedure. ${RECORD_ONLY}` },
+        { caution: `Do not resume work on this item until you have spoken to ${p.actor.name} and re-isolated it under your site procedure. Acknowledge this in Isoledger before you raise, clear or take over any tag. ${RECORD_ONLY}` },
+      ]);
+    case 'my-tag-reassigned-in-absence':
+      return renderBlocks(`Your ${word.toLowerCase()} on ${where} was reassigned in your absence`, [
+        { p: `${p.recipientName}, ${p.actor.name} moved your ${word.toLowerCase()} tag to ${t.holderName} while you were not on site.` },
+        { facts: [['Reason', p.reason ?? '—']] }, tagFacts(t), ...links,
+        // OSHA 29 CFR 1910.147(e)(3)(iii): the employee is to be told before resuming work.
+        { caution: `Your lock may have been removed. Acknowledge this in Isoledger and speak to ${p.actor.name} before you resume any work. ${RECORD_ONLY}` },
       ]);
     case 'my-tag-handed-over':
-      return renderBlocks(`Your ${word.toLowerCase()} on ${where} was taken over by ${p.actor.name}`, [
-        { p: `${p.recipientName}, ${p.actor.name} took over your ${word.toLowerCase()} tag and now holds it.` },
+      return renderBlocks(`Your ${word.toLowerCase()} on ${where} was handed over to ${p.actor.name}`, [
+        { p: `${p.recipientName}, ${p.actor.name} accepted your hand-over and now holds the ${word.toLowerCase()} tag.` },
         ...(p.note ? [{ facts: [['Hand-over note', p.note]] as [string, string][] }] : []), tagFacts(t), ...links, { caution: RECORD_ONLY },
       ]);
     default:
@@ -73,8 +80,15 @@ function digestMail(p: DigestPayload, url: (path: string) => string): RenderedMa
   const blocks: Block[] = [{ p: `${p.recipientName}, these tags on your sites in ${p.timeZone} need attention today (${p.localDate}).` }];
   if (p.overdue.length) blocks.push({ p: `Past expiry (${p.overdue.length}):` }, { list: p.overdue.map(line) });
   if (p.dueToday.length) blocks.push({ p: `Due today (${p.dueToday.length}):` }, { list: p.dueToday.map(line) });
+  const reviews = p.reviewsOverdue ?? [];
+  if (reviews.length) {
+    blocks.push({ p: `Isolation procedure review overdue (${reviews.length}): the yearly review is more than 12 months old or not recorded.` }, {
+      list: reviews.map((r) => ({ text: `${r.siteName} · last review ${r.lastReviewedOn ?? 'none recorded'}`, url: url(`/sites/${r.siteId}`) })),
+    });
+  }
   blocks.push({ link: { label: 'Open the board', url: url('/board') } }, { caution: RECORD_ONLY });
-  return renderBlocks(`Tags for ${p.localDate}: ${p.overdue.length} past expiry, ${p.dueToday.length} due today`, blocks);
+  const reviewNote = reviews.length ? `, ${reviews.length} procedure review${reviews.length === 1 ? '' : 's'} overdue` : '';
+  return renderBlocks(`Tags for ${p.localDate}: ${p.overdue.length} past expiry, ${p.dueToday.length} due today${reviewNote}`, blocks);
 }
 
 function linkMail(kind: 'invite' | 'password-reset', p: LinkPayload, url: (path: string) => string): RenderedMail {

@@ -6,6 +6,7 @@ import { tags } from './0004-tags';
 import { labels } from './0005-labels';
 import { notifications } from './0006-notifications';
 import { tagPhotos } from './0007-tag-photos';
+import { tagRules } from './0008-tag-rules';
 import { visitReadings } from './0009-visit-readings';
 import { connections } from './0010-connections';
 import { visits } from './0011-visits';
@@ -18,4 +19,4 @@ export interface Migration {
 }
 
 /** Every migration, in order. A new migration is a new file here, never an edit to an applied one. */
-export const migrations: Migration[] = [foundation, register, readings, tags, labels, notifications, tagPhotos, visitReadings, connections, visits, readingIdempotency];
+export const migrations: Migration[] = [foundation, register, readings, tags, labels, notifications, tagPhotos, tagRules, visitReadings, connections, visits, readingIdempotency];

@@ -11,6 +11,9 @@ export class TagEvent extends Model<InferAttributes<TagEvent>, InferCreationAttr
   declare at: Date;
   declare byId: number;
   declare data: Record<string, unknown>;
+  /** The Idempotency-Key the action came with, and a fingerprint of its request; unique per person. */
+  declare idempotencyKey: CreationOptional<string | null>;
+  declare requestHash: CreationOptional<string | null>;
   declare by?: NonAttribute<User>;
 
   static initModel(sequelize: Sequelize) {
@@ -23,6 +26,8 @@ export class TagEvent extends Model<InferAttributes<TagEvent>, InferCreationAttr
         at: { type: DataTypes.DATE(3), allowNull: false },
         byId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         data: { type: DataTypes.JSON, allowNull: false },
+        idempotencyKey: { type: DataTypes.STRING(100), allowNull: true },
+        requestHash: { type: DataTypes.CHAR(64), allowNull: true },
       },
       { sequelize, tableName: 'tag_events', underscored: true, timestamps: false },
     );

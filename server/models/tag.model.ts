@@ -1,6 +1,8 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 import type { EnergySource } from '@/shared/rules/register';
 import type { ReleaseCheck, TagKind, TagStatus } from '@/shared/rules/tags';
+import type { OmittedSource } from '@/shared/rules/tag-isolation';
+import type { TagProof } from './tag-proof.model';
 import type { TagPoint } from './tag-point.model';
 import type { User } from './user.model';
 
@@ -26,12 +28,22 @@ export class Tag extends Model<InferAttributes<Tag>, InferCreationAttributes<Tag
   declare clearance: CreationOptional<'normal' | 'in-absence' | null>;
   declare checks: CreationOptional<Partial<Record<ReleaseCheck, boolean>> | null>;
   declare idempotencyKey: string | null;
+  /** Fingerprint of the raise request, so a replayed key with a different body or item is refused. */
+  declare requestHash: string | null;
+  declare omittedSources: CreationOptional<OmittedSource[] | null>;
+  /** An open hand-over offer (cleared on acceptance or withdrawal; lapsed once offerLapsesAt has passed). */
+  declare offerToId: CreationOptional<number | null>;
+  declare offerNote: CreationOptional<string | null>;
+  declare offeredAt: CreationOptional<Date | null>;
+  declare offerLapsesAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare points?: NonAttribute<TagPoint[]>;
   declare holder?: NonAttribute<User>;
   declare raisedBy?: NonAttribute<User>;
   declare clearedBy?: NonAttribute<User | null>;
+  declare offerTo?: NonAttribute<User | null>;
+  declare proofs?: NonAttribute<TagProof[]>;
 
   static initModel(sequelize: Sequelize) {
     Tag.init(
@@ -56,6 +68,12 @@ export class Tag extends Model<InferAttributes<Tag>, InferCreationAttributes<Tag
         clearance: { type: DataTypes.STRING(20), allowNull: true },
         checks: { type: DataTypes.JSON, allowNull: true },
         idempotencyKey: { type: DataTypes.STRING(100), allowNull: true },
+        requestHash: { type: DataTypes.CHAR(64), allowNull: true },
+        omittedSources: { type: DataTypes.JSON, allowNull: true },
+        offerToId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        offerNote: { type: DataTypes.TEXT, allowNull: true },
+        offeredAt: { type: DataTypes.DATE(3), allowNull: true },
+        offerLapsesAt: { type: DataTypes.DATE(3), allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -221,6 +221,7 @@ export const DEMO_SITES: DemoSite[] = [
         items: [
           boiler('B-01', 'Boiler 1', 250, { photo: true }),
           boiler('B-02', 'Boiler 2', 250, { servicedMonthsAgo: 16 }),
+          valve('V-02', 'Boiler 2 gas isolating valve', 'Gas supply', 'normally-open', 'manual', { notes: 'Quarter-turn lever valve on the gas drop to boiler 2; takes a padlock through the lever.' }),
           heatingPump('P-01A', 'Primary pump A', 'LTHW primary', 'duty', 'Primary header'),
           heatingPump('P-01B', 'Primary pump B', 'LTHW primary', 'standby', 'Primary header'),
           heatingPump('P-02A', 'Heating circuit 1 pump A', 'LTHW heating circuit 1', 'duty', 'Perimeter radiators'),

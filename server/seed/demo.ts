@@ -41,7 +41,7 @@ export async function seedDemo(sequelize: Sequelize, opts: { bcryptCost?: number
       const seeded = await seedDemoRegister({ organisationId, authors, storage, transaction });
       if (seeded) await seedDemoConnections({ organisationId, createdBy: authors.supervisor.id, transaction });
       await seedDemoReadings({ organisationId, authors, transaction });
-      if (seeded) await seedDemoTags({ organisationId, engineer: authors.engineer, engineer2: authors.engineer2, transaction });
+      if (seeded) await seedDemoTags({ organisationId, engineer: authors.engineer, engineer2: authors.engineer2, supervisor: authors.supervisor, transaction });
       const viewer = users.find((u) => u.email === 'viewer@example.test');
       if (seeded && viewer) {
         // The demo viewer (a client's facilities manager, say) is given two of the three sites.

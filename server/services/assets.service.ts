@@ -44,7 +44,7 @@ export async function loadAssetDtos(ids: number[], opts: { photos: boolean }): P
     .filter((id) => byId.has(id))
     .map((id) => ({
       ...toAssetDto(byId.get(id)!, { photos: photos?.get(id), thumbnailPhotoId: thumbs.get(id) ?? null }),
-      ...(states.get(id) ?? { state: 'normal' as const, liveIsolations: 0, liveOverrides: 0, overdue: false }),
+      ...(states.get(id) ?? { state: 'normal' as const, liveIsolations: 0, liveOverrides: 0, unprovedIsolations: 0, overdue: false }),
     }));
 }
 

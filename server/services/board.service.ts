@@ -2,6 +2,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { clock } from '@/server/lib/clock';
 import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
 import { visibleSiteIds } from '@/server/services/site-access.service';
+import { overdueReviews } from '@/server/services/procedure-reviews.service';
 import { boardState, boardStateSql, type BoardSortKey } from '@/shared/rules/board';
 import type { TagKind } from '@/shared/rules/tags';
 import type { BoardQueryInput } from '@/shared/schemas/queries';
@@ -17,7 +18,7 @@ const SORT_COLUMNS: Record<BoardSortKey, string> = {
   name: 'a.name',
   kind: 't.kind',
   reason: 't.reason',
-  author: 'h.name',
+  holder: 'h.name',
   raised: 't.raised_at',
   expires: 't.expires_at',
   // The state follows the expiry (overdue, then due soon, then live), so it sorts by expiry.
@@ -38,7 +39,7 @@ function whereClause(scope: Scope, f: Partial<BoardFilters>) {
   }
   if (f.siteId) { where.push('a.site_id = ?'); values.push(f.siteId); }
   if (f.kind) { where.push('t.kind = ?'); values.push(f.kind); }
-  if (f.authorId) { where.push('t.holder_id = ?'); values.push(f.authorId); }
+  if (f.holderId) { where.push('t.holder_id = ?'); values.push(f.holderId); }
   if (f.state) {
     const state = boardStateSql(f.state, 't.expires_at', scope.now);
     where.push(state.sql);
@@ -53,6 +54,9 @@ function whereClause(scope: Scope, f: Partial<BoardFilters>) {
   return { sql: where.join(' AND '), values };
 }
 
+/** 1 when the tag has a proof recorded (OSHA 29 CFR 1910.147(d)(6)). */
+const PROVED = 'EXISTS (SELECT 1 FROM tag_proofs p WHERE p.tag_id = t.id)';
+
 const FROM = `FROM tags t
   JOIN assets a ON a.id = t.asset_id
   JOIN sites s ON s.id = a.site_id
@@ -62,7 +66,7 @@ const FROM = `FROM tags t
 interface RawRow {
   id: number; siteId: number; siteName: string; timeZone: string; plantRoomId: number | null; plantRoomName: string | null;
   assetId: number; plantId: string; assetName: string; kind: TagKind; reason: string; holderId: number; holderName: string;
-  raisedAt: Date | string; expiresAt: Date | string; contactPhone: string;
+  raisedAt: Date | string; expiresAt: Date | string; contactPhone: string; proved: number | string;
 }
 
 function toRow(r: RawRow, scope: Scope): BoardRow {
@@ -71,8 +75,8 @@ function toRow(r: RawRow, scope: Scope): BoardRow {
   return {
     id: r.id, siteId: r.siteId, siteName: r.siteName, timeZone: r.timeZone, plantRoomId: r.plantRoomId, plantRoomName: r.plantRoomName,
     assetId: r.assetId, plantId: r.plantId, assetName: r.assetName, kind: r.kind, reason: r.reason,
-    author: { id: r.holderId, name: r.holderName }, raisedAt: new Date(r.raisedAt).toISOString(), expiresAt: expiresAt.toISOString(),
-    state, contactPhone: r.contactPhone,
+    holder: { id: r.holderId, name: r.holderName }, raisedAt: new Date(r.raisedAt).toISOString(), expiresAt: expiresAt.toISOString(),
+    state, contactPhone: r.contactPhone, proved: r.kind === 'isolation' ? Number(r.proved) > 0 : null,
   };
 }
 
@@ -89,7 +93,7 @@ async function selectRows(sequelize: Sequelize, scope: Scope, f: BoardFilters, l
     // the default sort reads only one page of index entries; the other tables join on their primary keys.
     `SELECT STRAIGHT_JOIN t.id, a.site_id AS siteId, s.name AS siteName, s.time_zone AS timeZone, a.plant_room_id AS plantRoomId, r.name AS plantRoomName,
        a.id AS assetId, a.plant_id AS plantId, a.name AS assetName, t.kind, t.reason, t.holder_id AS holderId, h.name AS holderName,
-       t.raised_at AS raisedAt, t.expires_at AS expiresAt, t.contact_phone AS contactPhone
+       t.raised_at AS raisedAt, t.expires_at AS expiresAt, t.contact_phone AS contactPhone, ${PROVED} AS proved
      ${FROM} WHERE ${w.sql}
      ORDER BY ${SORT_COLUMNS[f.sort.key]} ${dir}, t.expires_at ${dir}, t.id ${dir} LIMIT ? OFFSET ?`,
     { replacements: [...w.values, limit, offset], type: QueryTypes.SELECT },
@@ -100,16 +104,18 @@ async function selectRows(sequelize: Sequelize, scope: Scope, f: BoardFilters, l
 export async function getBoard(sequelize: Sequelize, actor: AuthUser, f: BoardFilters, paging: { page: number; pageSize: number; offset: number }): Promise<BoardResponse> {
   const scope = await scopeFor(actor);
   const w = whereClause(scope, f);
-  const [items, [{ n }], perSite] = await Promise.all([
+  const [items, [{ n }], perSite, reviewsOverdue] = await Promise.all([
     selectRows(sequelize, scope, f, paging.pageSize, paging.offset),
     sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n ${FROM} WHERE ${w.sql}`, { replacements: w.values, type: QueryTypes.SELECT }),
     siteCounts(sequelize, scope),
+    overdueReviews(sequelize, scope.organisationId, scope.siteIds, scope.now),
   ]);
-  const sum = (k: 'total' | 'overdue' | 'dueSoon') => perSite.reduce((acc, s) => acc + s[k], 0);
+  const sum = (k: 'total' | 'overdue' | 'dueSoon' | 'notProved') => perSite.reduce((acc, s) => acc + s[k], 0);
   return {
     items, total: Number(n), page: paging.page, pageSize: paging.pageSize,
-    counts: { total: sum('total'), overdue: sum('overdue'), dueSoon: sum('dueSoon'), perSite },
+    counts: { total: sum('total'), overdue: sum('overdue'), dueSoon: sum('dueSoon'), notProved: sum('notProved'), perSite },
     asOf: scope.now.toISOString(),
+    reviewsOverdue,
   };
 }
 
@@ -118,14 +124,15 @@ async function siteCounts(sequelize: Sequelize, scope: Scope): Promise<BoardSite
   const w = whereClause(scope, {});
   const overdue = boardStateSql('overdue', 't.expires_at', scope.now);
   const dueSoon = boardStateSql('due-soon', 't.expires_at', scope.now);
-  const rows = await sequelize.query<{ siteId: number; siteName: string; total: number; overdue: number; dueSoon: number }>(
+  const rows = await sequelize.query<{ siteId: number; siteName: string; total: number; overdue: number; dueSoon: number; notProved: number }>(
     `SELECT a.site_id AS siteId, s.name AS siteName, COUNT(*) AS total,
-       SUM(${overdue.sql}) AS overdue, SUM(${dueSoon.sql}) AS dueSoon
+       SUM(${overdue.sql}) AS overdue, SUM(${dueSoon.sql}) AS dueSoon,
+       SUM(t.kind = 'isolation' AND NOT ${PROVED}) AS notProved
      FROM tags t JOIN assets a ON a.id = t.asset_id JOIN sites s ON s.id = a.site_id
      WHERE ${w.sql} GROUP BY a.site_id, s.name ORDER BY s.name, a.site_id`,
     { replacements: [...overdue.values, ...dueSoon.values, ...w.values], type: QueryTypes.SELECT },
   );
-  return rows.map((r) => ({ siteId: r.siteId, siteName: r.siteName, total: Number(r.total), overdue: Number(r.overdue), dueSoon: Number(r.dueSoon) }));
+  return rows.map((r) => ({ siteId: r.siteId, siteName: r.siteName, total: Number(r.total), overdue: Number(r.overdue), dueSoon: Number(r.dueSoon), notProved: Number(r.notProved) }));
 }
 
 /** The current view for the CSV export: every page, up to `max` rows. */

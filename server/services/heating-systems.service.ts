@@ -8,7 +8,7 @@ import { HeatingSystem as HeatingSystemRow } from '@/server/models/heating-syste
 import { User } from '@/server/models/user.model';
 import { describeSettings, expansionSettingsFor, runExpansionCheck } from '@/server/services/calc.service';
 import { findSite } from '@/server/services/register-access';
-import { expansionInputsFor, type RegisterContext } from '@/shared/rules/readings';
+import { expansionInputsFor, SYSTEM_FILL_AND_CURVE_KEYS, type RegisterContext } from '@/shared/rules/readings';
 import type { GasFamily } from '@/shared/calc';
 import type { HeatingSystemInput } from '@/shared/schemas/readings';
 import type { HeatingSystem, RegisterVessel, SystemExpansionCheck } from '@/shared/types/readings';
@@ -24,12 +24,7 @@ const VALUE_KEYS = [
   'maxFlowTemperatureC',
   'fillTemperatureC',
   'preChargeMarginBar',
-  'glycolKind',
-  'glycolPercent',
-  'compensationOutsideLowC',
-  'compensationFlowAtLowC',
-  'compensationOutsideHighC',
-  'compensationFlowAtHighC',
+  ...SYSTEM_FILL_AND_CURVE_KEYS,
 ] as const;
 
 const numberAttr = (attributes: Record<string, unknown> | null | undefined, key: string): number | null => {

@@ -1,6 +1,7 @@
 import { Op, type Sequelize, type WhereOptions } from 'sequelize';
 import { clock } from '@/server/lib/clock';
 import { HttpError, notFound } from '@/server/lib/http-error';
+import { assertCanEdit } from '@/server/services/register-access';
 import { renderLabelsPdf } from '@/server/lib/label-pdf';
 import { insertWithLabelCode } from '@/server/lib/unique-clash';
 import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
@@ -33,6 +34,8 @@ export async function replaceLabel(sequelize: Sequelize, actor: AuthUser, assetI
       ? await Asset.findOne({ where: { id: assetId, organisationId: actor.organisationId }, transaction, lock: transaction.LOCK.UPDATE })
       : null;
     if (!asset) throw notFound('Plant item');
+    // A new code kills the printed one: only someone who may edit the item may do that.
+    assertCanEdit(actor, asset.createdBy, 'item');
     const retiredCode = asset.labelCode;
     await RetiredLabel.create({ organisationId: asset.organisationId, assetId: asset.id, code: retiredCode, retiredAt: clock.now(), retiredBy: actor.id }, { transaction });
     const labelCode = await insertWithLabelCode(async (code) => {

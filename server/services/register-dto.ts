@@ -68,7 +68,7 @@ export function toPlantRoomDto(room: PlantRoom, extra: { assetCount: number; liv
 }
 
 /** `now` decides overdue: the next service date is compared with today's date at the site. */
-export type AssetBaseDto = Omit<AssetDto, 'state' | 'overdue' | 'liveIsolations' | 'liveOverrides'>;
+export type AssetBaseDto = Omit<AssetDto, 'state' | 'overdue' | 'liveIsolations' | 'liveOverrides' | 'unprovedIsolations'>;
 
 /** The register's view of an item; its tag state is added by the assets service. */
 export function toAssetDto(asset: Asset, extra: { photos?: Photo[]; thumbnailPhotoId: number | null; now?: Date }): AssetBaseDto {

@@ -6,8 +6,10 @@ import { Site } from '@/server/models/site.model';
 import { Tag } from '@/server/models/tag.model';
 import { TagEvent } from '@/server/models/tag-event.model';
 import { TagPoint } from '@/server/models/tag-point.model';
+import { TagProof } from '@/server/models/tag-proof.model';
 import { User } from '@/server/models/user.model';
 import { assetStateFromTags, isDueSoon, isOverdue, type AssetTagSummary } from '@/shared/rules/tags';
+import { offerIsOpen } from '@/shared/rules/tag-handover';
 import type { PointUse, Tag as TagDto, TagEvent as TagEventDto } from '@/shared/types/tags';
 
 const person = (u: User | null | undefined) => (u ? { id: u.id, name: u.name } : { id: 0, name: 'Unknown' });
@@ -19,7 +21,12 @@ export const tagInclude = [
   { model: User, as: 'holder' },
   { model: User, as: 'raisedBy' },
   { model: User, as: 'clearedBy' },
+  { model: User, as: 'offerTo' },
+  { model: TagProof, as: 'proofs', include: [{ model: User, as: 'by' }] },
 ];
+
+/** An isolation is proved once a proof is recorded; an override has nothing to prove (null). */
+export const provedOf = (tag: Pick<Tag, 'kind' | 'proofs'>) => (tag.kind === 'isolation' ? (tag.proofs ?? []).length > 0 : null);
 
 export function toTagDto(tag: Tag, events?: TagEvent[]): TagDto {
   const now = clock.now();
@@ -41,7 +48,7 @@ export function toTagDto(tag: Tag, events?: TagEvent[]): TagDto {
     overdue: isOverdue(tag, now),
     dueSoon: isDueSoon(tag, now),
     reason: tag.reason,
-    author: person(tag.holder),
+    holder: person(tag.holder),
     holderId: tag.holderId,
     raisedBy: person(tag.raisedBy),
     raisedAt: tag.raisedAt.toISOString(),
@@ -49,10 +56,18 @@ export function toTagDto(tag: Tag, events?: TagEvent[]): TagDto {
     contactPhone: tag.contactPhone,
     lockNumber: tag.lockNumber,
     energySources: tag.energySources,
+    omittedSources: tag.omittedSources ?? [],
     points: (tag.points ?? []).map((p) => {
       const pa = (p as TagPoint & { asset: Asset | null }).asset;
-      return { id: p.id, assetId: p.assetId, asset: pa ? { id: pa.id, plantId: pa.plantId, name: pa.name } : null, description: p.description, method: p.method };
+      return { id: p.id, assetId: p.assetId, asset: pa ? { id: pa.id, plantId: pa.plantId, name: pa.name } : null, description: p.description, method: p.method, lockNumber: p.lockNumber };
     }),
+    proved: provedOf(tag),
+    proofs: [...(tag.proofs ?? [])].sort((a, b) => a.id - b.id).map((p) => ({
+      id: p.id, method: p.method, instrument: p.instrument, reading: p.reading, note: p.note, by: person(p.by), at: p.at.toISOString(),
+    })),
+    handoverOffer: tag.status === 'live' && offerIsOpen({ toUserId: tag.offerToId ?? null, lapsesAt: tag.offerLapsesAt ?? null }, now)
+      ? { to: person(tag.offerTo), note: tag.offerNote ?? '', offeredAt: tag.offeredAt!.toISOString(), lapsesAt: tag.offerLapsesAt!.toISOString() }
+      : null,
     normalState: tag.normalState,
     leftState: tag.leftState,
     clearedAt: tag.clearedAt ? tag.clearedAt.toISOString() : null,
@@ -76,11 +91,13 @@ export async function tagSummaries(organisationId: number, assetIds: number[]): 
   const result = new Map<number, AssetTagSummary>();
   if (!assetIds.length) return result;
   const live = await Tag.findAll({
-    attributes: ['assetId', 'kind', 'status', 'expiresAt'],
+    attributes: ['id', 'assetId', 'kind', 'status', 'expiresAt'],
     where: { organisationId, status: 'live', assetId: { [Op.in]: assetIds } },
+    include: [{ model: TagProof, as: 'proofs', attributes: ['id'] }],
   });
   const now = clock.now();
-  for (const id of assetIds) result.set(id, assetStateFromTags(live.filter((t) => t.assetId === id), now));
+  const states = live.map((t) => ({ assetId: t.assetId, kind: t.kind, status: t.status, expiresAt: t.expiresAt, proved: provedOf(t) ?? true }));
+  for (const id of assetIds) result.set(id, assetStateFromTags(states.filter((t) => t.assetId === id), now));
   return result;
 }
 
@@ -89,9 +106,10 @@ export async function pointUses(organisationId: number, assetId: number): Promis
   const points = await TagPoint.findAll({
     where: { assetId },
     include: [{ model: Tag, as: 'tag', where: { organisationId, status: 'live' }, include: [{ model: Asset, as: 'asset' }, { model: User, as: 'holder' }] }],
+    order: [['id', 'ASC']],
   });
   return points.map((p) => {
     const tag = (p as TagPoint & { tag: Tag & { asset: Asset } }).tag;
-    return { tagId: tag.id, method: p.method, forAsset: { id: tag.asset.id, plantId: tag.asset.plantId, name: tag.asset.name }, holder: person(tag.holder) };
+    return { tagId: tag.id, method: p.method, lockNumber: p.lockNumber || tag.lockNumber, forAsset: { id: tag.asset.id, plantId: tag.asset.plantId, name: tag.asset.name }, holder: person(tag.holder) };
   });
 }

@@ -1,25 +1,27 @@
-import { Op, UniqueConstraintError, type Sequelize, type Transaction, type WhereOptions } from 'sequelize';
+import { Op, type Sequelize, type Transaction, type WhereOptions } from 'sequelize';
 import { clock } from '@/server/lib/clock';
 import { HttpError, notFound, unprocessable } from '@/server/lib/http-error';
 import type { AuthUser } from '@/server/middleware/auth';
 import { Asset } from '@/server/models/asset.model';
 import { Tag } from '@/server/models/tag.model';
-import { TagEvent } from '@/server/models/tag-event.model';
+import { User } from '@/server/models/user.model';
 import { TagPoint } from '@/server/models/tag-point.model';
+import { TagProof } from '@/server/models/tag-proof.model';
+import { appendEvent } from '@/server/services/tag-events';
+import { once, type Idempotency } from '@/server/services/tag-idempotency';
+import { requireNoPendingNotices } from '@/server/services/tag-notices.service';
 import { loadEvents, tagInclude, toTagDto } from '@/server/services/tag-dto';
 import { photosOf, storePhoto } from '@/server/services/photos.service';
 import { toPhotoDto } from '@/server/services/register-dto';
 import type { PhotoStorage } from '@/server/lib/photo-storage';
 import { enqueueTagMail } from '@/server/mail/tag-mail';
-import { expiryProblem, mayRaise, type TagEventType } from '@/shared/rules/tags';
-import type { RaiseTagInput } from '@/shared/schemas/tags';
+import { expiryProblem, mayRaise } from '@/shared/rules/tags';
+import { ENERGY_SOURCE_LABELS } from '@/shared/rules/register';
+import { sourcesNotAccounted } from '@/shared/rules/tag-isolation';
+import type { ProofInput, RaiseTagInput } from '@/shared/schemas/tags';
 import type { ListResponse } from '@/shared/types/user';
 import type { Tag as TagDto } from '@/shared/types/tags';
 import { seesSite, siteWhere } from '@/server/services/site-access.service';
-
-export async function appendEvent(tag: Tag, type: TagEventType, actor: AuthUser, data: Record<string, unknown>, transaction: Transaction) {
-  await TagEvent.create({ tagId: tag.id, organisationId: tag.organisationId, type, at: clock.now(), byId: actor.id, data }, { transaction });
-}
 
 async function findAsset(actor: AuthUser, assetId: number, transaction?: Transaction) {
   const asset = Number.isSafeInteger(assetId) ? await Asset.findOne({ where: { id: assetId, organisationId: actor.organisationId, ...siteWhere(actor) }, transaction }) : null;
@@ -35,49 +37,48 @@ export async function getTag(actor: AuthUser, id: number): Promise<TagDto> {
 }
 
 /** Adds a photo of the lock or tag in place to a live tag, and records it in the tag's history. */
-export async function addTagPhoto(sequelize: Sequelize, storage: PhotoStorage, actor: AuthUser, id: number, file: Buffer, caption: string | null): Promise<TagDto> {
+export async function addTagPhoto(sequelize: Sequelize, storage: PhotoStorage, actor: AuthUser, id: number, file: Buffer, caption: string | null, idem: Idempotency | null = null): Promise<TagDto> {
   if (actor.role === 'viewer') throw new HttpError(403, 'forbidden', 'Viewers cannot add photos.');
-  const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId } }) : null;
-  if (!tag) throw notFound('Tag');
-  if (tag.status !== 'live') throw new HttpError(409, 'already-cleared', 'This tag has been cleared; it takes no new photos.');
-  await sequelize.transaction(async (transaction) => {
-    const photo = await storePhoto(storage, { organisationId: actor.organisationId, tagId: tag.id, createdBy: actor.id, caption }, file, transaction);
-    await appendEvent(tag, 'photo-added', actor, { photoId: photo.id, caption }, transaction);
+  await once(actor, idem, async () => {
+    const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId } }) : null;
+    if (!tag) throw notFound('Tag');
+    if (tag.status !== 'live') throw new HttpError(409, 'already-cleared', 'This tag has been cleared; it takes no new photos.');
+    await sequelize.transaction(async (transaction) => {
+      const photo = await storePhoto(storage, { organisationId: actor.organisationId, tagId: tag.id, createdBy: actor.id, caption }, file, transaction);
+      await appendEvent(tag, 'photo-added', actor, { photoId: photo.id, caption }, transaction, idem);
+    });
+    return tag.id;
   });
   return getTag(actor, id);
 }
 
+/** Records a proof of an isolation (OSHA 29 CFR 1910.147(d)(6)) with its event, inside the caller's transaction. */
+export async function recordProof(tag: Tag, actor: AuthUser, proof: ProofInput, transaction: Transaction, idem: Idempotency | null = null) {
+  const row = await TagProof.create(
+    { tagId: tag.id, organisationId: tag.organisationId, method: proof.method, instrument: proof.instrument, reading: proof.reading, note: proof.note, byId: actor.id, at: clock.now() },
+    { transaction },
+  );
+  await appendEvent(tag, 'proved', actor, { proofId: row.id, method: proof.method, instrument: proof.instrument, reading: proof.reading, note: proof.note }, transaction, idem);
+}
+
 /**
- * Raises a tag. The author is the signed-in user, never the input. With an Idempotency-Key, a retried request
- * returns the tag the first one created instead of creating a second.
+ * Raises a tag. The holder is the signed-in user, never the input. With an Idempotency-Key, a retried request
+ * returns the tag the first one created instead of creating a second; the same key with a different body or item
+ * is refused (422).
  */
-export async function raiseTag(sequelize: Sequelize, actor: AuthUser, assetId: number, input: RaiseTagInput, idempotencyKey: string | null): Promise<{ tag: TagDto; created: boolean }> {
+export async function raiseTag(sequelize: Sequelize, actor: AuthUser, assetId: number, input: RaiseTagInput, idem: Idempotency | null): Promise<{ tag: TagDto; created: boolean }> {
   if (!mayRaise(actor)) throw new HttpError(403, 'forbidden', 'Viewers cannot raise tags.');
-  if (idempotencyKey) {
-    const existing = await Tag.findOne({ where: { raisedById: actor.id, idempotencyKey } });
-    if (existing) return { tag: await getTag(actor, existing.id), created: false };
-  }
-  const asset = await findAsset(actor, assetId);
-  if (asset.archivedAt) throw new HttpError(409, 'archived', 'This item is archived; tags cannot be raised on it.');
-  const now = clock.now();
-  const expiresAt = new Date(input.expiresAt);
-  const expiry = expiryProblem(expiresAt, now, actor.role);
-  if (expiry) throw unprocessable('Check the expiry.', { expiresAt: expiry });
-
-  const fields: Record<string, string> = {};
-  if (input.kind === 'isolation') {
-    const foreign = input.energySources.filter((s) => !asset.energySources.includes(s));
-    if (foreign.length) fields.energySources = `This item is not recorded with these energy sources: ${foreign.join(', ')}.`;
-    const pointAssetIds = input.points.map((p) => p.assetId).filter((x): x is number => !!x);
-    if (pointAssetIds.length) {
-      const found = await Asset.count({ where: { id: { [Op.in]: pointAssetIds }, organisationId: actor.organisationId } });
-      if (found !== new Set(pointAssetIds).size) fields.points = 'An isolation point refers to a plant item that does not exist.';
-    }
-  }
-  if (Object.keys(fields).length) throw unprocessable('Some fields need attention.', fields);
-
-  try {
-    const id = await sequelize.transaction(async (transaction) => {
+  const { tagId, replayed } = await once(actor, idem, async () => {
+    await requireNoPendingNotices(actor);
+    const asset = await findAsset(actor, assetId);
+    if (asset.archivedAt) throw new HttpError(409, 'archived', 'This item is archived; tags cannot be raised on it.');
+    const now = clock.now();
+    const expiresAt = new Date(input.expiresAt);
+    const expiry = expiryProblem(expiresAt, now, actor.role);
+    if (expiry) throw unprocessable('Check the expiry.', { expiresAt: expiry });
+    if (input.kind === 'isolation') await checkIsolation(actor, asset, input);
+    return sequelize.transaction(async (transaction) => {
+      const isolation = input.kind === 'isolation';
       const tag = await Tag.create(
         {
           organisationId: actor.organisationId,
@@ -89,34 +90,56 @@ export async function raiseTag(sequelize: Sequelize, actor: AuthUser, assetId: n
           raisedAt: now,
           expiresAt,
           contactPhone: input.contactPhone,
-          lockNumber: input.lockNumber,
-          energySources: input.kind === 'isolation' ? input.energySources : [],
-          normalState: input.kind === 'override' ? input.normalState : '',
-          leftState: input.kind === 'override' ? input.leftState : '',
-          idempotencyKey,
+          lockNumber: isolation ? input.lockNumber : '',
+          energySources: isolation ? input.energySources : [],
+          omittedSources: isolation ? input.omittedSources : [],
+          normalState: isolation ? '' : input.normalState,
+          leftState: isolation ? '' : input.leftState,
+          idempotencyKey: idem?.key ?? null,
+          requestHash: idem?.hash ?? null,
         },
         { transaction },
       );
-      if (input.kind === 'isolation') {
-        await TagPoint.bulkCreate(input.points.map((p) => ({ tagId: tag.id, assetId: p.assetId ?? null, description: p.description, method: p.method })), { transaction });
+      if (isolation) {
+        await TagPoint.bulkCreate(input.points.map((p) => ({ tagId: tag.id, assetId: p.assetId ?? null, description: p.description, method: p.method, lockNumber: p.lockNumber })), { transaction });
       }
-      await appendEvent(tag, 'raised', actor, { reason: input.reason, expiresAt: expiresAt.toISOString(), kind: input.kind }, transaction);
+      await appendEvent(tag, 'raised', actor, { reason: input.reason, expiresAt: expiresAt.toISOString(), kind: input.kind }, transaction, idem);
+      if (isolation && input.proof) await recordProof(tag, actor, input.proof, transaction);
       await enqueueTagMail('raised', tag, actor, transaction);
       return tag.id;
     });
-    return { tag: await getTag(actor, id), created: true };
-  } catch (err) {
-    // Two retries racing with the same key: the unique index lets one through; answer the other with that tag.
-    if (err instanceof UniqueConstraintError && idempotencyKey) {
-      const existing = await Tag.findOne({ where: { raisedById: actor.id, idempotencyKey } });
-      if (existing) return { tag: await getTag(actor, existing.id), created: false };
-    }
-    throw err;
+  });
+  return { tag: await getTag(actor, tagId), created: !replayed };
+}
+
+/**
+ * Every energy source recorded on the item is isolated or named as left out with a reason (OSHA 29 CFR
+ * 1910.147(d)(3)–(d)(4)); sources the item does not have, and points on items that do not exist, are refused.
+ */
+async function checkIsolation(actor: AuthUser, asset: Asset, input: RaiseTagInput) {
+  const fields: Record<string, string> = {};
+  const label = (s: string) => ENERGY_SOURCE_LABELS[s as keyof typeof ENERGY_SOURCE_LABELS] ?? s;
+  const named = [...input.energySources, ...input.omittedSources.map((o) => o.source)];
+  const foreign = named.filter((s) => !asset.energySources.includes(s));
+  if (foreign.length) fields.energySources = `This item is not recorded with these energy sources: ${foreign.join(', ')}.`;
+  const both = input.omittedSources.filter((o) => input.energySources.includes(o.source)).map((o) => o.source);
+  if (both.length) fields.omittedSources = `A source is either isolated or left out, not both: ${both.map(label).join(', ')}.`;
+  const missing = sourcesNotAccounted(asset.energySources, input.energySources, input.omittedSources);
+  if (missing.length && !fields.energySources) {
+    fields.energySources = `Not accounted for: ${missing.map(label).join(', ')}. Isolate each one, or leave it out with the reason it is safe (${missing.join(', ')}).`;
   }
+  const pointAssetIds = input.points.map((p) => p.assetId).filter((x): x is number => !!x);
+  if (pointAssetIds.length) {
+    const found = await Asset.count({ where: { id: { [Op.in]: pointAssetIds }, organisationId: actor.organisationId } });
+    if (found !== new Set(pointAssetIds).size) fields.points = 'An isolation point refers to a plant item that does not exist.';
+  }
+  if (Object.keys(fields).length) throw unprocessable(missing.length ? `Every energy source of the item must be accounted for: ${missing.join(', ')}.` : 'Some fields need attention.', fields);
 }
 
 export interface TagFilters {
   status?: string;
+  /** Only live tags with an open hand-over offer to the caller. */
+  offeredToMe?: boolean;
   assetId?: number;
   siteId?: number;
   kind?: string;
@@ -127,6 +150,7 @@ export async function listTags(actor: AuthUser, filters: TagFilters, paging: { p
   if (filters.status === 'live' || filters.status === 'cleared') Object.assign(where, { status: filters.status });
   if (filters.kind === 'isolation' || filters.kind === 'override') Object.assign(where, { kind: filters.kind });
   if (filters.assetId) Object.assign(where, { assetId: filters.assetId });
+  if (filters.offeredToMe) Object.assign(where, { status: 'live', offerToId: actor.id, offerLapsesAt: { [Op.gt]: clock.now() } });
   const assetWhere = { ...(filters.siteId ? { siteId: filters.siteId } : {}), ...siteWhere(actor) };
   const narrowed = Reflect.ownKeys(assetWhere).length > 0;
   const include = tagInclude.map((inc) => (inc.as === 'asset' && narrowed ? { ...inc, where: assetWhere, required: true } : inc));
@@ -142,6 +166,27 @@ export async function lockTag(actor: AuthUser, id: number, transaction: Transact
   return tag;
 }
 
+/** One action on one locked, live tag, once per Idempotency-Key; answers with the tag as it now is. */
+export async function actOnTag(sequelize: Sequelize, actor: AuthUser, id: number, idem: Idempotency | null, run: (tag: Tag, transaction: Transaction) => Promise<void>): Promise<TagDto> {
+  await once(actor, idem, () => sequelize.transaction(async (transaction) => {
+    const tag = await lockTag(actor, id, transaction);
+    requireLive(tag);
+    await run(tag, transaction);
+    return tag.id;
+  }));
+  return getTag(actor, id);
+}
+
 export function requireLive(tag: Tag) {
   if (tag.status !== 'live') throw new HttpError(409, 'already-cleared', 'This tag has already been cleared.');
+}
+
+/** People a tag can be offered or reassigned to: active, signed-up, non-viewer members of the caller's organisation. */
+export async function listTagColleagues(actor: AuthUser): Promise<{ id: number; name: string; role: string }[]> {
+  const users = await User.findAll({
+    where: { organisationId: actor.organisationId, active: true, role: { [Op.ne]: 'viewer' }, passwordHash: { [Op.ne]: null } },
+    attributes: ['id', 'name', 'role'],
+    order: [['name', 'ASC']],
+  });
+  return users.map((u) => ({ id: u.id, name: u.name, role: u.role }));
 }

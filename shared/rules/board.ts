@@ -35,7 +35,7 @@ export const BOARD_STATE_LABELS: Record<BoardState, string> = {
 };
 
 /** Columns the board sorts by; `sort=expires` ascending, `sort=-expires` descending. */
-export const BOARD_SORT_KEYS = ['site', 'plant-room', 'plant-id', 'name', 'kind', 'reason', 'author', 'raised', 'expires', 'state'] as const;
+export const BOARD_SORT_KEYS = ['site', 'plant-room', 'plant-id', 'name', 'kind', 'reason', 'holder', 'raised', 'expires', 'state'] as const;
 export type BoardSortKey = (typeof BOARD_SORT_KEYS)[number];
 /** Soonest expiry first, so overdue tags lead. */
 export const DEFAULT_BOARD_SORT: BoardSortKey = 'expires';

@@ -1,5 +1,5 @@
 import type { Role } from '@/shared/rules/roles';
-import { clearancePermission, mayExtend, mayTakeOver, type TagLike } from '@/shared/rules/tags';
+import { clearancePermission, mayExtend, mayReassignInAbsence, type TagLike } from '@/shared/rules/tags';
 
 /**
  * Who may do what, in one place. The server's `requirePermission` middleware and `ensurePermission`,
@@ -30,7 +30,9 @@ export const ROLE_PERMISSIONS = {
   annotateTag: ['admin', 'supervisor', 'engineer'],
   /** Oversee tags everywhere: clear in the holder's absence, extend others' tags, the longer expiry limit. */
   superviseTags: ['admin', 'supervisor'],
-  /** Replace an item's QR label (the old code stops working). */
+  /** Record a site's periodic review of its isolation procedure (OSHA 29 CFR 1910.147(c)(6)). */
+  reviewProcedures: ['admin', 'supervisor'],
+  /** Replace an item's QR label (the old code stops working); engineers only on items they may edit. */
   replaceLabel: ['admin', 'supervisor', 'engineer'],
   /** The board of live tags across sites. */
   viewBoard: ['admin', 'supervisor', 'viewer'],
@@ -82,7 +84,10 @@ export const RECORD_PERMISSIONS = {
   /** Clear a tag: its holder; a supervisor through clearance in absence (shared/rules/tags.ts). */
   clearTag: (actor: Actor, tag: TagSubject) => clearancePermission(actor, tag) !== 'none',
   extendTag: (actor: Actor, tag: TagSubject) => mayExtend(actor, tag),
-  takeOverTag: (actor: Actor, tag: TagSubject) => mayTakeOver(actor, tag),
+  /** Move an absent holder's tag to a colleague: a supervisor's absence procedure (shared/rules/tags.ts). A hand-over between two people present is offer and acceptance (shared/rules/tag-handover.ts). */
+  reassignTagInAbsence: (actor: Actor, tag: TagSubject) => mayReassignInAbsence(actor, tag),
+  /** Replace an item's label: only someone who may edit the item, as a new code kills the printed one. */
+  replaceItemLabel: (actor: Actor, record: { createdBy: number | null | undefined }) => may(actor, 'replaceLabel') && RECORD_PERMISSIONS.editRecord(actor, record),
   /** Add a photo of the lock or tag in place: while the tag is live. */
   addTagPhoto: (actor: Actor, tag: TagSubject) => tag.status === 'live' && may(actor, 'annotateTag'),
 } as const;

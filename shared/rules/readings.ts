@@ -43,9 +43,8 @@ export interface RegisterContext {
   burnerPressureSettingMbar?: number | null;
 }
 
-const SYSTEM_KEYS = [
-  'designDeltaTK',
-  'safetyValveSettingGaugePa',
+/** The system's glycol fill and weather-compensation curve. */
+export const SYSTEM_FILL_AND_CURVE_KEYS = [
   'glycolKind',
   'glycolPercent',
   'compensationOutsideLowC',
@@ -53,6 +52,9 @@ const SYSTEM_KEYS = [
   'compensationOutsideHighC',
   'compensationFlowAtHighC',
 ] as const satisfies readonly (keyof CheckSettingsValues & keyof HeatingSystem)[];
+
+/** System values the checks take as they are stored. */
+const SYSTEM_KEYS = ['designDeltaTK', 'safetyValveSettingGaugePa', ...SYSTEM_FILL_AND_CURVE_KEYS] as const;
 
 /** The design values a new set on an item is checked against, each with where it came from. */
 export function resolveCheckSettings(ctx: RegisterContext): CheckSettings {

@@ -18,17 +18,25 @@ export const ISOLATION_METHOD_LABELS: Record<IsolationMethod, string> = {
   other: 'Other (described)',
 };
 
-export const TAG_EVENT_TYPES = ['raised', 'extended', 'handed-over', 'note-added', 'photo-added', 'cleared', 'cleared-in-absence'] as const;
+export const TAG_EVENT_TYPES = [
+  'raised', 'proved', 'extended', 'handover-offered', 'handover-withdrawn', 'handed-over', 'reassigned-in-absence',
+  'note-added', 'photo-added', 'cleared', 'cleared-in-absence', 'acknowledged',
+] as const;
 export type TagEventType = (typeof TAG_EVENT_TYPES)[number];
 
 export const TAG_EVENT_LABELS: Record<TagEventType, string> = {
   raised: 'Raised',
+  proved: 'Isolation proved',
   extended: 'Expiry extended',
-  'handed-over': 'Handed over',
+  'handover-offered': 'Hand-over offered',
+  'handover-withdrawn': 'Hand-over offer withdrawn',
+  'handed-over': 'Handed over and accepted',
+  'reassigned-in-absence': 'Reassigned in the holder’s absence',
   'note-added': 'Note added',
   'photo-added': 'Photo added',
   cleared: 'Cleared',
   'cleared-in-absence': 'Cleared in the holder’s absence',
+  acknowledged: 'Holder acknowledged',
 };
 
 /** Release checks recorded when an isolation is cleared (OSHA 29 CFR 1910.147(e)(1)–(e)(2)). */
@@ -56,6 +64,8 @@ export interface TagLike {
   status: TagStatus;
   expiresAt: string | Date;
   holderId: number;
+  /** Isolations only: a proof of the isolation has been recorded (OSHA 29 CFR 1910.147(d)(6)). */
+  proved?: boolean | null;
 }
 
 const ms = (t: string | Date) => (t instanceof Date ? t.getTime() : Date.parse(t));
@@ -79,6 +89,8 @@ export interface AssetTagSummary {
   state: AssetState;
   liveIsolations: number;
   liveOverrides: number;
+  /** Live isolations with no proof recorded yet ("not proved"). */
+  unprovedIsolations: number;
   overdue: boolean;
 }
 
@@ -86,7 +98,7 @@ export interface AssetTagSummary {
  * The item's state from its tags: isolated while any isolation tag is live (group isolation: until the last
  * one is cleared, OSHA 29 CFR 1910.147(f)(3)), else overridden while any override is live, else normal.
  */
-export function assetStateFromTags(tags: Pick<TagLike, 'kind' | 'status' | 'expiresAt'>[], now: Date): AssetTagSummary {
+export function assetStateFromTags(tags: Pick<TagLike, 'kind' | 'status' | 'expiresAt' | 'proved'>[], now: Date): AssetTagSummary {
   const live = tags.filter((t) => t.status === 'live');
   const liveIsolations = live.filter((t) => t.kind === 'isolation').length;
   const liveOverrides = live.filter((t) => t.kind === 'override').length;
@@ -94,6 +106,7 @@ export function assetStateFromTags(tags: Pick<TagLike, 'kind' | 'status' | 'expi
     state: liveIsolations > 0 ? 'isolated' : liveOverrides > 0 ? 'overridden' : 'normal',
     liveIsolations,
     liveOverrides,
+    unprovedIsolations: live.filter((t) => t.kind === 'isolation' && !t.proved).length,
     overdue: live.some((t) => isOverdue(t, now)),
   };
 }
@@ -120,9 +133,9 @@ export function mayExtend(actor: Actor, tag: Pick<TagLike, 'holderId' | 'status'
   return tag.status === 'live' && (actor.id === tag.holderId || supervisory(actor.role));
 }
 
-/** Hand over: an on-coming engineer or supervisor takes a live tag from its current holder. */
-export function mayTakeOver(actor: Actor, tag: Pick<TagLike, 'holderId' | 'status'>): boolean {
-  return tag.status === 'live' && actor.role !== 'viewer' && actor.id !== tag.holderId;
+/** Reassignment in absence: a supervisor or admin moves someone else's live tag through the absence procedure. */
+export function mayReassignInAbsence(actor: Actor, tag: Pick<TagLike, 'holderId' | 'status'>): boolean {
+  return tag.status === 'live' && supervisory(actor.role) && actor.id !== tag.holderId;
 }
 
 export function mayRaise(actor: Actor): boolean {

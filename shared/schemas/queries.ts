@@ -31,7 +31,7 @@ export const importQuery = yup.object({ dryRun: yup.boolean().transform((_v, raw
 export const boardQuery = pagingQuery.shape({
   siteId: idField('siteId'),
   kind: oneOfField('kind', TAG_KINDS),
-  authorId: idField('authorId'),
+  holderId: idField('holderId'),
   state: oneOfField('state', BOARD_STATES),
   q: searchField(),
   sort: yup.mixed<ReturnType<typeof readBoardSort>>().transform((_v, raw) => readBoardSort(raw)).default(() => readBoardSort(undefined)),

@@ -1,6 +1,7 @@
 import * as yup from 'yup';
 import { ENERGY_SOURCES } from '@/shared/rules/register';
 import { ISOLATION_METHODS, MIN_CLEARANCE_REASON, MIN_RAISE_REASON, RELEASE_CHECKS, TAG_KINDS } from '@/shared/rules/tags';
+import { MIN_OMISSION_REASON, PROOF_METHODS, PROOF_NEEDS_INSTRUMENT, type ProofMethod } from '@/shared/rules/tag-isolation';
 
 const reasonText = (min: number, what: string) =>
   yup.string().trim().required(`State the reason for ${what}.`).min(min, `At least ${min} characters: say what and why.`).max(2000);
@@ -9,17 +10,41 @@ export const tagPointSchema = yup.object({
   assetId: yup.number().integer().positive().nullable().default(null),
   description: yup.string().trim().max(300).default(''),
   method: yup.string().oneOf([...ISOLATION_METHODS], 'Choose how this point is isolated.').required('Choose how this point is isolated.'),
+  /** The lock or tag number on this point, when it differs from the tag's own lock (a lock box, a hasp). */
+  lockNumber: yup.string().trim().max(60).default(''),
 }).test('point-named', 'Choose a plant item or describe the isolation point.', (p) => !!p && (!!p.assetId || !!p.description));
 
-/** Raising a tag. The author is never part of the input: the server sets it from the session. */
+const lockNumberText = () => yup.string().trim().max(60, 'At most 60 characters.');
+
+/** How the isolation was proved; who and when come from the session and the server's clock. */
+export const proofSchema = yup.object({
+  method: yup.string().oneOf([...PROOF_METHODS], 'Choose how the isolation was proved.').required('Choose how the isolation was proved.'),
+  instrument: yup.string().trim().max(120).default('')
+    .when('method', { is: (m: ProofMethod) => PROOF_NEEDS_INSTRUMENT.includes(m), then: (s) => s.required('Name the tester or gauge used.') }),
+  reading: yup.string().trim().max(60).default(''),
+  note: yup.string().trim().max(500).default('')
+    .when('method', { is: 'other', then: (s) => s.required('Describe how the isolation was proved.') }),
+});
+export type ProofInput = yup.InferType<typeof proofSchema>;
+
+const omittedSourceSchema = yup.object({
+  source: yup.string().oneOf([...ENERGY_SOURCES], 'Choose the energy source.').required('Choose the energy source.'),
+  reason: yup.string().trim().required('Say why this source needs no isolation.')
+    .min(MIN_OMISSION_REASON, `At least ${MIN_OMISSION_REASON} characters: say why this source is safe without isolation.`).max(500),
+});
+
+/** Raising a tag. The holder is never part of the input: the server sets it from the session. */
 export const raiseTagSchema = yup.object({
   kind: yup.string().oneOf([...TAG_KINDS], 'Choose isolation or override.').required('Choose isolation or override.'),
   reason: reasonText(MIN_RAISE_REASON, 'this tag'),
   expiresAt: yup.date().typeError('Give a valid expiry date and time.').required('Give an expiry.'),
   contactPhone: yup.string().trim().max(40).default(''),
-  lockNumber: yup.string().trim().max(60).default(''),
+  lockNumber: lockNumberText().default('')
+    .when('kind', { is: 'isolation', then: (s) => s.required('Give the number of your personal lock.') }),
   energySources: yup.array(yup.string().oneOf([...ENERGY_SOURCES]).required()).default([])
     .when('kind', { is: 'isolation', then: (s) => s.min(1, 'Choose at least one energy source that is isolated.') }),
+  omittedSources: yup.array(omittedSourceSchema).default([]),
+  proof: proofSchema.nullable().default(null),
   points: yup.array(tagPointSchema).default([])
     .when('kind', { is: 'isolation', then: (s) => s.min(1, 'Add at least one isolation point and its method.') }),
   normalState: yup.string().trim().max(300).default('')
@@ -44,13 +69,27 @@ export const clearTagSchema = yup.object({
 });
 export type ClearTagInput = yup.InferType<typeof clearTagSchema>;
 
+/** OSHA 29 CFR 1910.147(e)(3)(i)–(ii): the holder is verified not on site and reasonable efforts were made to reach them. */
+const absenceEvidence = {
+  holderNotOnSite: yup.boolean().oneOf([true], 'Confirm that the holder is not on site.').required('Confirm that the holder is not on site.'),
+  contactAttempts: yup.string().trim().required('Record the attempts made to reach the holder.').min(MIN_CLEARANCE_REASON, `At least ${MIN_CLEARANCE_REASON} characters: who tried, how and when.`).max(2000),
+};
+
 export const clearInAbsenceSchema = yup.object({
   reason: reasonText(MIN_CLEARANCE_REASON, 'clearing this tag'),
-  authorNotOnSite: yup.boolean().oneOf([true], 'Confirm that the holder is not on site.').required('Confirm that the holder is not on site.'),
-  contactAttempts: yup.string().trim().required('Record the attempts made to reach the holder.').min(MIN_CLEARANCE_REASON, `At least ${MIN_CLEARANCE_REASON} characters: who tried, how and when.`).max(2000),
+  ...absenceEvidence,
   checks: releaseChecks,
 });
 export type ClearInAbsenceInput = yup.InferType<typeof clearInAbsenceSchema>;
+
+/** A supervisor moves a tag whose holder cannot be reached to a named colleague, with the same evidence. */
+export const reassignInAbsenceSchema = yup.object({
+  reason: reasonText(MIN_CLEARANCE_REASON, 'reassigning this tag'),
+  ...absenceEvidence,
+  toUserId: yup.number().typeError('Choose the colleague who takes the tag.').integer().positive().required('Choose the colleague who takes the tag.'),
+  lockNumber: lockNumberText().default(''),
+});
+export type ReassignInAbsenceInput = yup.InferType<typeof reassignInAbsenceSchema>;
 
 export const extendTagSchema = yup.object({
   expiresAt: yup.date().typeError('Give a valid expiry date and time.').required('Give the new expiry.'),
@@ -58,12 +97,19 @@ export const extendTagSchema = yup.object({
 });
 export type ExtendTagInput = yup.InferType<typeof extendTagSchema>;
 
-export const handoverSchema = yup.object({
+/** The holder offers the tag to a named colleague. */
+export const handoverOfferSchema = yup.object({
+  toUserId: yup.number().typeError('Choose the colleague who takes the tag.').integer().positive().required('Choose the colleague who takes the tag.'),
   note: yup.string().trim().max(2000).default(''),
-  contactPhone: yup.string().trim().max(40).default(''),
-  lockNumber: yup.string().trim().max(60).default(''),
 });
-export type HandoverInput = yup.InferType<typeof handoverSchema>;
+export type HandoverOfferInput = yup.InferType<typeof handoverOfferSchema>;
+
+/** The named colleague accepts with the number of the lock they have just put on (before the old one comes off). */
+export const handoverAcceptSchema = yup.object({
+  lockNumber: lockNumberText().default(''),
+  contactPhone: yup.string().trim().max(40).default(''),
+});
+export type HandoverAcceptInput = yup.InferType<typeof handoverAcceptSchema>;
 
 export const tagNoteSchema = yup.object({
   text: yup.string().trim().required('Write the note.').max(2000),

@@ -20,9 +20,10 @@ export type ErrorCode =
   // 409: the record is not in a state that allows it
   | 'conflict' | 'already-cleared' | 'already-holder' | 'already-joined' | 'archived' | 'email-taken' | 'inactive'
   | 'last-admin' | 'own-tag' | 'self' | 'visit-in-progress' | 'visit-ended'
+  | 'not-an-isolation' | 'offer-open' | 'no-open-offer' | 'offer-lapsed' | 'acknowledge-first' | 'nothing-to-acknowledge'
   // 413, 415, 422: what was sent cannot be used
   | 'file-too-large' | 'entity.too.large' | 'too-many-labels' | 'unsupported-image' | 'invalid' | 'image-too-large' | 'unreadable-image'
-  | 'undecided-tags'
+  | 'undecided-tags' | 'idempotency-key-reused'
   // 429, 5xx
   | 'rate-limited' | 'server-error' | 'unavailable' | 'busy'
   // made up by the client when there is no answer to read

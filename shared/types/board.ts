@@ -6,8 +6,8 @@ import type { PersonRef } from '@/shared/types/tags';
 export interface BoardQuery {
   siteId?: number;
   kind?: TagKind;
-  /** The holder (the board's "author" column). */
-  authorId?: number;
+  /** The person who holds the tag now. */
+  holderId?: number;
   /** Matches the row's state exactly; leave out for every live tag. */
   state?: BoardState;
   /** Words matched against plant ID, item name, reason and holder name. */
@@ -34,17 +34,29 @@ export interface BoardRow {
   kind: TagKind;
   reason: string;
   /** Whoever holds the tag now. */
-  author: PersonRef;
+  holder: PersonRef;
   raisedAt: string;
   expiresAt: string;
   state: BoardState;
   contactPhone: string;
+  /** Isolations: whether a proof is recorded (false = "not proved"); overrides: null. */
+  proved: boolean | null;
 }
 
 export interface BoardCounts {
   total: number;
   overdue: number;
   dueSoon: number;
+  /** Live isolations with no proof recorded. */
+  notProved: number;
+}
+
+/** A site whose isolation procedure was last reviewed more than 12 months ago, or never (OSHA 29 CFR 1910.147(c)(6)). */
+export interface ReviewOverdueSite {
+  siteId: number;
+  siteName: string;
+  /** YYYY-MM-DD of the last review; null when none is recorded. */
+  lastReviewedOn: string | null;
 }
 
 export interface BoardSiteCounts extends BoardCounts {
@@ -65,4 +77,6 @@ export interface BoardResponse {
   counts: BoardCounts & { perSite: BoardSiteCounts[] };
   /** Server time the board was computed at (ISO UTC); states are as of this instant. */
   asOf: string;
+  /** The caller's sites whose periodic procedure review is overdue. */
+  reviewsOverdue: ReviewOverdueSite[];
 }

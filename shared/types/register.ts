@@ -92,6 +92,8 @@ export interface Asset {
   overdue: boolean;
   liveIsolations: number;
   liveOverrides: number;
+  /** Live isolations on the item with no proof recorded ("not proved"). */
+  unprovedIsolations: number;
   /** Single item only: its live tags, and the live tags for which it is an isolation point. */
   liveTags?: Tag[];
   pointUses?: PointUse[];

@@ -1,6 +1,7 @@
 import type { EnergySource } from '@/shared/rules/register';
 import type { Photo } from '@/shared/types/register';
 import type { IsolationMethod, ReleaseCheck, TagEventType, TagKind, TagStatus } from '@/shared/rules/tags';
+import type { OmittedSource, ProofMethod } from '@/shared/rules/tag-isolation';
 
 export interface PersonRef {
   id: number;
@@ -13,6 +14,27 @@ export interface TagPoint {
   asset: { id: number; plantId: string; name: string } | null;
   description: string;
   method: IsolationMethod;
+  /** The lock or tag number on this point when it has its own ('' = the tag's lock). */
+  lockNumber: string;
+}
+
+/** A record that the isolation was proved before work (OSHA 29 CFR 1910.147(d)(6)). */
+export interface TagProof {
+  id: number;
+  method: ProofMethod;
+  instrument: string;
+  reading: string;
+  note: string;
+  by: PersonRef;
+  at: string;
+}
+
+/** An open hand-over offer: the holder has named a colleague, who has not yet accepted. */
+export interface HandoverOffer {
+  to: PersonRef;
+  note: string;
+  offeredAt: string;
+  lapsesAt: string;
 }
 
 export interface TagEvent {
@@ -33,9 +55,9 @@ export interface Tag {
   overdue: boolean;
   dueSoon: boolean;
   reason: string;
-  /** The person who holds the tag now (the raiser, or whoever took it over). */
-  author: PersonRef;
-  /** Same as author.id; lets the shared rules (clearancePermission, mayExtend, mayTakeOver) take a tag as it is. */
+  /** The person who holds the tag now (the raiser, or whoever accepted it in a hand-over or reassignment). */
+  holder: PersonRef;
+  /** Same as holder.id; lets the shared rules (clearancePermission, mayExtend, handoverRole) take a tag as it is. */
   holderId: number;
   raisedBy: PersonRef;
   raisedAt: string;
@@ -43,7 +65,13 @@ export interface Tag {
   contactPhone: string;
   lockNumber: string;
   energySources: EnergySource[];
+  /** The item's sources this isolation leaves out, each with the reason. */
+  omittedSources: OmittedSource[];
   points: TagPoint[];
+  /** Isolations: false until a proof is recorded ("not proved"). Overrides: null (nothing to prove). */
+  proved: boolean | null;
+  proofs: TagProof[];
+  handoverOffer: HandoverOffer | null;
   normalState: string;
   leftState: string;
   clearedAt: string | null;
@@ -59,6 +87,19 @@ export interface Tag {
 export interface PointUse {
   tagId: number;
   method: IsolationMethod;
+  /** The lock on this point: its own number, else the tag's. */
+  lockNumber: string;
   forAsset: { id: number; plantId: string; name: string };
   holder: PersonRef;
+}
+
+/** Something that happened to the caller's tag while they were away; they acknowledge it before doing anything else. */
+export interface TagNotice {
+  id: number;
+  tagId: number;
+  kind: 'cleared-in-absence' | 'reassigned-in-absence';
+  at: string;
+  by: PersonRef;
+  reason: string;
+  asset: { id: number; plantId: string; name: string };
 }

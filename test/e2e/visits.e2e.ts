@@ -68,7 +68,7 @@ describe('an engineer’s visit', () => {
     await page.getByTestId('live-tags').waitFor();
     const panel = await text(page, 'live-tags');
     expect(panel).toContain('Rhian Castellane');
-    expect(panel).toContain('Burner fault lockout: flame sensor replacement, waiting for the part');
+    expect(panel).toContain('Burner fault: flame failure probe replacement, waiting for the part');
     expect(panel).toContain('+44 7700 900104');
     await expect(text(page, 'live-tags-title')).resolves.toMatch(/Live tags in Basement plant room \(\d+\)/);
     await screenshot(page, 'visits-plant-room-live-tags-phone');

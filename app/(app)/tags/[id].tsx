@@ -10,6 +10,7 @@ import { PendingForRecord } from '@/components/offline/pending-actions';
 import { TagActions } from '@/components/tags/tag-actions';
 import { TagFacts } from '@/components/tags/tag-facts';
 import { TagHeader } from '@/components/tags/tag-header';
+import { TagNoticesBanner } from '@/components/tags/tag-notices-banner';
 import { TagTimeline } from '@/components/tags/tag-timeline';
 import { useNow } from '@/components/tags/use-now';
 import { useMeQuery } from '@/hooks/api/use-auth';
@@ -34,7 +35,7 @@ export default function TagScreen() {
             <TagTimeline events={t.events ?? []} timeZone={t.asset.timeZone} now={now} />
           </Card>
         );
-        const actions = me ? <TagActions tag={t} me={me} /> : null;
+        const actions = me ? <TagActions tag={t} me={me} now={now} /> : null;
         const canAddPhoto = t.status === 'live' && !!me && me.role !== 'viewer';
         const photos = (
           <Card>
@@ -46,6 +47,7 @@ export default function TagScreen() {
         const live = t.status === 'live';
         return (
           <Screen>
+            {me && me.role !== 'viewer' ? <TagNoticesBanner /> : null}
             <TagHeader tag={t} now={now} />
             <PendingForRecord tagId={t.id} />
             {isWide ? (

@@ -5,6 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { RaiseTagForm } from '@/components/tags/raise-tag-form';
+import { TagNoticesBanner } from '@/components/tags/tag-notices-banner';
 import { errorMessage } from '@/hooks/api/request';
 import { useAssetQuery } from '@/hooks/api/use-assets';
 import { useMeQuery } from '@/hooks/api/use-auth';
@@ -50,6 +51,7 @@ export default function RaiseTagScreen() {
         if (!site.data || (plan.isFetching && !plan.data)) return <LoadingView />;
         return (
           <Screen title={title} subtitle={subtitle}>
+            <TagNoticesBanner />
             {plan.isError ? <Notice tone="info" word="No plan">{`The isolation plan could not be loaded (${errorMessage(plan.error)}). Enter the points yourself.`}</Notice> : null}
             {plan.data ? <Notice tone="caution" word="From the isolation plan">The sources and points below come from the register. Check each point on site; change or remove any that is wrong, and add what the plan could not see.</Notice> : null}
             <RaiseTagForm asset={item} site={site.data} me={me} initialKind={kind} plan={plan.data} onRaised={(tag) => router.replace(`/tags/${tag.id}`)} onCancel={() => (router.canGoBack() ? router.back() : router.replace(`/assets/${item.id}`))} />

@@ -6,6 +6,7 @@ import { runDigests } from '@/server/mail/digest';
 import { createOrganisation, tokenFor, type OrgUsers } from '@/test/setup/app';
 import { createSiteWithAssets } from '@/test/setup/register-fixtures';
 import { insertTag } from '@/test/server/support/tag-fixtures';
+import { ProcedureReview } from '@/server/models/procedure-review.model';
 import { outboxRows, setupMailTestApp, TEST_PUBLIC_URL } from '@/test/server/support/mail-test-app';
 
 // 07:02 on 15 January in London (GMT, UTC+0 in winter); 16:02 the same day in Tokyo (UTC+9, no DST) — IANA tz database via Intl.
@@ -32,10 +33,16 @@ beforeAll(async () => {
     tomorrow: (await tag(london.valve.id, u.engineer.id, 20)).id,
     tokyoToday: (await tag(tokyo.pump.id, u.engineer.id, 24)).id,
   };
+  const review = (organisationId: number, siteId: number, reviewerId: number, reviewedOn: string) => ProcedureReview.create({
+    organisationId, siteId, reviewedOn, reviewerId, observed: [{ id: u.engineer.id, name: 'hazel engineer' }], deviations: 'None found', corrections: 'None needed', signedOffAt: LONDON_MORNING,
+  });
+  await review(org.organisation.id, london.site.id, u.supervisor.id, '2024-03-01');
+  await review(org.organisation.id, tokyo.site.id, u.supervisor.id, '2023-12-01');
   // An organisation with a site and no live tags: its supervisors' runs are recorded and nothing is sent.
   const q = await createOrganisation('quiet');
   quiet = q.users;
-  await createSiteWithAssets(q.organisation.id, quiet.supervisor.id, { name: 'Quiet Depot' });
+  const depot = await createSiteWithAssets(q.organisation.id, quiet.supervisor.id, { name: 'Quiet Depot' });
+  await review(q.organisation.id, depot.site.id, quiet.supervisor.id, '2024-09-10');
   // A second, independent connection pool to the same database, standing for a second server process.
   second = new Sequelize(env.t.db.url, { dialect: 'mariadb', logging: false, timezone: '+00:00' });
 });
@@ -100,10 +107,32 @@ describe('runDigests', () => {
     await env.worker.runOnce();
     const mails = await env.inbox.to(u.admin.email);
     expect(mails).toHaveLength(1);
-    expect(mails[0].subject).toBe('Tags for 2025-01-16: 0 past expiry, 1 due today');
+    // OSHA 29 CFR 1910.147(c)(6)(i): reviewed at least annually; the Tokyo site's last review (2023-12-01) is over 12 months old.
+    expect(mails[0].subject).toBe('Tags for 2025-01-16: 0 past expiry, 1 due today, 1 procedure review overdue');
+    expect(mails[0].text).toContain('Hazel Annex · last review 2023-12-01');
     expect(mails[0].text).toContain(`${TEST_PUBLIC_URL}/tags/${ids.tokyoToday}`);
     expect(mails[0].text).toContain('Asia/Tokyo');
     expect(mails[0].text).not.toContain(`/tags/${ids.overdue}`);
+  });
+
+  it('lists a site’s procedure review as overdue from the day after it is 12 months old, by the site’s own date', async () => {
+    await env.inbox.clear();
+    // 2025-03-01 in London is exactly 12 months after the 2024-03-01 review: due, not yet overdue.
+    const dueDay = new Date('2025-03-01T07:02:00.000Z');
+    await runDigests(dueDay, { sequelize: env.t.db.sequelize });
+    clock.now = () => dueDay;
+    await env.worker.runOnce();
+    const [onTime] = await env.inbox.to(u.supervisor.email);
+    expect(onTime.text).not.toContain('Hazel School · last review');
+    await env.inbox.clear();
+    // OSHA 29 CFR 1910.147(c)(6)(i): "at least annually" – the next morning it is overdue.
+    const nextDay = new Date('2025-03-02T07:02:00.000Z');
+    await runDigests(nextDay, { sequelize: env.t.db.sequelize });
+    clock.now = () => nextDay;
+    await env.worker.runOnce();
+    const [late] = await env.inbox.to(u.supervisor.email);
+    expect(late.subject).toMatch(/1 procedure review overdue$/);
+    expect(late.text).toContain('Hazel School · last review 2024-03-01');
   });
 
   it('skips a morning it missed entirely rather than sending it in the afternoon', async () => {

@@ -28,7 +28,8 @@ const inHours = (h: number) => new Date(clock.now().getTime() + h * 3600_000).to
 const allChecks = { workComplete: true, guardsRefitted: true, personnelClear: true, testedSafe: true };
 const raise = async (who = 'engineer', assetId = plant.pump.id) => {
   const res = await post(who, `/api/assets/${assetId}/tags`, {
-    kind: 'isolation', reason: 'Replace mechanical seal', expiresAt: inHours(6), energySources: ['electrical'],
+    kind: 'isolation', reason: 'Replace mechanical seal', expiresAt: inHours(6), energySources: ['electrical'], lockNumber: 'RW-12',
+    omittedSources: ['mechanical', 'hot-water', 'stored-pressure'].map((source) => ({ source, reason: 'Pump valved off and drained; nothing can turn it' })),
     points: [{ assetId: plant.isolator.id, method: 'isolator-locked' }], contactPhone: '+44 7700 900222',
   });
   expect(res.status).toBe(201);
@@ -82,12 +83,13 @@ describe('tag e-mails over SMTP', () => {
     expect(await subjectsFor(u.engineer.email)).toEqual([]);
   });
 
-  it('tells the holder, with a caution, and the other supervisors when a tag is cleared in the holder’s absence', async () => {
+  it('tells the holder, with a caution and whatever their settings, and the other supervisors when a tag is cleared in the holder’s absence', async () => {
     const tag = await raise();
     await deliver();
     await env.inbox.clear();
+    await request(env.t.app).patch('/api/me/settings').set('Authorization', `Bearer ${tok.engineer}`).send({ notifications: { myTags: false } });
     const res = await post('supervisor', `/api/tags/${tag.id}/clear-in-absence`, {
-      reason: 'Holder off site, pump needed for heating', authorNotOnSite: true, contactAttempts: 'Phoned twice at 09:10 and 09:25, no answer', checks: allChecks,
+      reason: 'Holder off site, pump needed for heating', holderNotOnSite: true, contactAttempts: 'Phoned twice at 09:10 and 09:25, no answer', checks: allChecks,
     });
     expect(res.status).toBe(200);
     await deliver();
@@ -98,17 +100,20 @@ describe('tag e-mails over SMTP', () => {
     expect(toHolder.text).toMatch(/CAUTION: Do not resume work on this item until you have spoken to rowan supervisor/);
     expect(await subjectsFor(u.admin.email)).toEqual(['Isolation cleared in the holder’s absence: P-01 Heating pump 1 (Rowan Library)']);
     expect(await subjectsFor(u.supervisor.email)).toEqual([]);
+    await request(env.t.app).patch('/api/me/settings').set('Authorization', `Bearer ${tok.engineer}`).send({ notifications: { myTags: true } });
+    expect((await post('engineer', `/api/tags/${tag.id}/acknowledge`, {})).status).toBe(200);
   });
 
-  it('tells the previous holder when someone takes their tag over, and no one else', async () => {
+  it('tells the previous holder when their colleague accepts the hand-over, and no one else', async () => {
     const tag = await raise();
     await deliver();
     await env.inbox.clear();
-    expect((await post('engineer2', `/api/tags/${tag.id}/handover`, { note: 'Shift change, lock L-9 transferred' })).status).toBe(200);
+    expect((await post('engineer', `/api/tags/${tag.id}/handover`, { toUserId: u.engineer2.id, note: 'Shift change, lock RW-12 coming off after yours' })).status).toBe(200);
+    expect((await post('engineer2', `/api/tags/${tag.id}/handover/accept`, { lockNumber: 'RW-31' })).status).toBe(200);
     await deliver();
     const [mail] = await env.inbox.to(u.engineer.email);
-    expect(mail.subject).toBe('Your isolation on P-01 Heating pump 1 (Rowan Library) was taken over by rowan engineer2');
-    expect(mail.text).toContain('Hand-over note: Shift change, lock L-9 transferred');
+    expect(mail.subject).toBe('Your isolation on P-01 Heating pump 1 (Rowan Library) was handed over to rowan engineer2');
+    expect(mail.text).toContain('Hand-over note: Shift change, lock RW-12 coming off after yours');
     expect(mail.text).toContain(`${TEST_PUBLIC_URL}/tags/${tag.id}`);
     expect((await env.inbox.all()).map((m) => m.to[0].address)).toEqual([u.engineer.email]);
   });

@@ -5,6 +5,7 @@ import type { Tag } from '@/server/models/tag.model';
 import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
 import { createSiteWithAssets } from '@/test/setup/register-fixtures';
 import { insertTag } from '@/test/server/support/tag-fixtures';
+import { TagProof } from '@/server/models/tag-proof.model';
 import type { BoardResponse } from '@/shared/types/board';
 
 const NOW = new Date('2025-03-04T10:00:00.000Z');
@@ -28,6 +29,7 @@ beforeAll(async () => {
   tags.overdueAsh = await make(ash.pump.id, u.engineer.id, -2, { reason: 'Replace mechanical seal', raisedHoursAgo: 30 });
   tags.dueSoonAsh = await make(ash.boiler.id, u.engineer2.id, 3, { kind: 'override', reason: 'Flow setpoint raised for commissioning', raisedHoursAgo: 2 });
   tags.liveAsh = await make(ash.valve.id, u.supervisor.id, 48, { reason: 'Valve gland repacking', raisedHoursAgo: 5 });
+  await TagProof.create({ tagId: tags.liveAsh.id, organisationId: orgId, method: 'pressure-at-zero', instrument: 'Gauge PG-3 on the strainer', reading: '0.0 bar', note: '', byId: u.supervisor.id, at: NOW });
   tags.liveBeech = await make(beech.pump.id, u.engineer2.id, 30, { reason: 'Coupling alignment', raisedHoursAgo: 1 });
   tags.overdueBeech = await make(beech.boiler.id, u.engineer.id, -1, { reason: 'Burner service 100% strip-down', raisedHoursAgo: 20 });
   await make(beech.isolator.id, u.engineer.id, 5, { status: 'cleared' });
@@ -52,23 +54,32 @@ describe('GET /api/board', () => {
     expect(res.body.items.map((r: { state: string }) => r.state)).toEqual(['overdue', 'overdue', 'due-soon', 'live', 'live']);
     expect(res.body.items[0]).toMatchObject({
       siteName: 'Ash Court', plantId: 'P-01', assetName: 'Heating pump 1', kind: 'isolation', reason: 'Replace mechanical seal',
-      author: { id: u.engineer.id, name: 'oak engineer' }, contactPhone: '+44 7700 900111', timeZone: 'Europe/London', plantRoomName: null,
+      holder: { id: u.engineer.id, name: 'oak engineer' }, proved: false, contactPhone: '+44 7700 900111', timeZone: 'Europe/London', plantRoomName: null,
       expiresAt: '2025-03-04T08:00:00.000Z', raisedAt: '2025-03-03T04:00:00.000Z',
     });
+    // OSHA 29 CFR 1910.147(d)(6): isolation is verified before work; the board counts isolations with no proof recorded.
+    expect(res.body.items.map((r: { id: number; proved: boolean | null }) => [r.id, r.proved])).toEqual([
+      [tags.overdueAsh.id, false], [tags.overdueBeech.id, false], [tags.dueSoonAsh.id, null], [tags.liveBeech.id, false], [tags.liveAsh.id, true],
+    ]);
     expect(res.body.counts).toEqual({
-      total: 5, overdue: 2, dueSoon: 1,
+      total: 5, overdue: 2, dueSoon: 1, notProved: 3,
       perSite: [
-        { siteId: ash.site.id, siteName: 'Ash Court', total: 3, overdue: 1, dueSoon: 1 },
-        { siteId: beech.site.id, siteName: 'Beech House', total: 2, overdue: 1, dueSoon: 0 },
+        { siteId: ash.site.id, siteName: 'Ash Court', total: 3, overdue: 1, dueSoon: 1, notProved: 1 },
+        { siteId: beech.site.id, siteName: 'Beech House', total: 2, overdue: 1, dueSoon: 0, notProved: 2 },
       ],
     });
+    // OSHA 29 CFR 1910.147(c)(6)(i): at least an annual review of the procedure; none is recorded for either site.
+    expect(res.body.reviewsOverdue).toEqual([
+      { siteId: ash.site.id, siteName: 'Ash Court', lastReviewedOn: null },
+      { siteId: beech.site.id, siteName: 'Beech House', lastReviewedOn: null },
+    ]);
     expect(res.body).toMatchObject({ total: 5, page: 1, pageSize: 50, asOf: NOW.toISOString() });
   });
 
   it.each([
     ['site', () => `?siteId=${beech.site.id}`, () => [tags.overdueBeech.id, tags.liveBeech.id]],
     ['kind', () => '?kind=override', () => [tags.dueSoonAsh.id]],
-    ['author (holder)', () => `?authorId=${u.engineer.id}`, () => [tags.overdueAsh.id, tags.overdueBeech.id]],
+    ['holder', () => `?holderId=${u.engineer.id}`, () => [tags.overdueAsh.id, tags.overdueBeech.id]],
     ['state overdue', () => '?state=overdue', () => [tags.overdueAsh.id, tags.overdueBeech.id]],
     ['state due-soon', () => '?state=due-soon', () => [tags.dueSoonAsh.id]],
     ['state live', () => '?state=live', () => [tags.liveBeech.id, tags.liveAsh.id]],
@@ -92,7 +103,7 @@ describe('GET /api/board', () => {
     ['raised', ['overdueAsh', 'overdueBeech', 'liveAsh', 'dueSoonAsh', 'liveBeech']],
     ['-expires', ['liveAsh', 'liveBeech', 'dueSoonAsh', 'overdueBeech', 'overdueAsh']],
     ['site', ['overdueAsh', 'dueSoonAsh', 'liveAsh', 'overdueBeech', 'liveBeech']],
-    ['author', ['overdueAsh', 'overdueBeech', 'dueSoonAsh', 'liveBeech', 'liveAsh']],
+    ['holder', ['overdueAsh', 'overdueBeech', 'dueSoonAsh', 'liveBeech', 'liveAsh']],
     ['name', ['overdueBeech', 'dueSoonAsh', 'overdueAsh', 'liveBeech', 'liveAsh']],
     ['kind', ['overdueAsh', 'overdueBeech', 'liveBeech', 'liveAsh', 'dueSoonAsh']],
     ['state', ['overdueAsh', 'overdueBeech', 'dueSoonAsh', 'liveBeech', 'liveAsh']],
@@ -123,12 +134,13 @@ describe('GET /api/board', () => {
   it('shows a viewer only the sites an admin has given them, counts included', async () => {
     const none = await board('viewer');
     expect(none.status).toBe(200);
-    expect(none.body).toMatchObject({ total: 0, items: [], counts: { total: 0, overdue: 0, dueSoon: 0, perSite: [] } });
+    expect(none.body).toMatchObject({ total: 0, items: [], counts: { total: 0, overdue: 0, dueSoon: 0, notProved: 0, perSite: [] }, reviewsOverdue: [] });
     const grant = await request(t.app).put(`/api/users/${u.viewer.id}/sites`).set('Authorization', `Bearer ${tok.admin}`).send({ siteIds: [ash.site.id] });
     expect(grant.status).toBe(200);
     const some = await board('viewer');
     expect(ids(some)).toEqual([tags.overdueAsh.id, tags.dueSoonAsh.id, tags.liveAsh.id]);
-    expect(some.body.counts).toEqual({ total: 3, overdue: 1, dueSoon: 1, perSite: [{ siteId: ash.site.id, siteName: 'Ash Court', total: 3, overdue: 1, dueSoon: 1 }] });
+    expect(some.body.counts).toEqual({ total: 3, overdue: 1, dueSoon: 1, notProved: 1, perSite: [{ siteId: ash.site.id, siteName: 'Ash Court', total: 3, overdue: 1, dueSoon: 1, notProved: 1 }] });
+    expect(some.body.reviewsOverdue.map((r: { siteId: number }) => r.siteId)).toEqual([ash.site.id]);
     expect((await board('viewer', `?siteId=${beech.site.id}`)).body.total).toBe(0);
     await request(t.app).put(`/api/users/${u.viewer.id}/sites`).set('Authorization', `Bearer ${tok.admin}`).send({ siteIds: [] });
     expect((await board('viewer')).body.total).toBe(0);

@@ -25,7 +25,7 @@ beforeAll(async () => {
   const birch = await createOrganisation('birch');
   plant = await createSiteWithAssets(org.organisation.id, u.admin.id);
   foreign = await createSiteWithAssets(birch.organisation.id, birch.users.admin.id, { name: 'Birch Site' });
-  for (const k of ['engineer', 'viewer'] as const) tok[k] = await tokenFor(t.app, u[k]);
+  for (const k of ['engineer', 'viewer', 'supervisor'] as const) tok[k] = await tokenFor(t.app, u[k]);
   tmp = fs.mkdtempSync(path.join(os.tmpdir(), 'isoledger-labels-'));
 });
 afterAll(async () => {
@@ -57,7 +57,11 @@ describe('POST /api/assets/:id/label/replace', () => {
   it('issues a new code, retires the old one for good and keeps it in the history', async () => {
     const old = plant.valve.labelCode;
     expect((await request(t.app).post(`/api/assets/${plant.valve.id}/label/replace`).set('Authorization', `Bearer ${tok.viewer}`)).status).toBe(403);
-    const res = await request(t.app).post(`/api/assets/${plant.valve.id}/label/replace`).set('Authorization', `Bearer ${tok.engineer}`);
+    // An engineer may replace labels only on items they may edit (items they added); this one an admin added.
+    const engineer = await request(t.app).post(`/api/assets/${plant.valve.id}/label/replace`).set('Authorization', `Bearer ${tok.engineer}`);
+    expect(engineer.status).toBe(403);
+    expect((await get(`/api/labels/${old}`)).body.id).toBe(plant.valve.id);
+    const res = await request(t.app).post(`/api/assets/${plant.valve.id}/label/replace`).set('Authorization', `Bearer ${tok.supervisor}`);
     expect(res.status).toBe(200);
     expect(res.body.retiredCode).toBe(old);
     expect(res.body.labelCode).not.toBe(old);
@@ -67,6 +71,13 @@ describe('POST /api/assets/:id/label/replace', () => {
     expect((await get(`/api/assets/${plant.valve.id}/label/retired`)).body).toEqual([expect.objectContaining({ code: old })]);
     // Reprinting gives the same (new) code.
     expect((await get(`/api/assets/${plant.valve.id}`)).body.labelCode).toBe(res.body.labelCode);
+  });
+
+  it('lets an engineer replace the label of an item they added', async () => {
+    const mine = await createSiteWithAssets(u.engineer.organisationId, u.engineer.id, { name: 'Engineer’s own site' });
+    const res = await request(t.app).post(`/api/assets/${mine.valve.id}/label/replace`).set('Authorization', `Bearer ${tok.engineer}`);
+    expect(res.status).toBe(200);
+    expect(res.body.retiredCode).toBe(mine.valve.labelCode);
   });
 });
 

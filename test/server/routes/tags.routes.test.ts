@@ -39,6 +39,10 @@ const isolation = (over: object = {}) => ({
   reason: 'Replace mechanical seal on heating pump 1',
   expiresAt: inHours(6),
   energySources: ['electrical', 'hot-water'],
+  omittedSources: [
+    { source: 'mechanical', reason: 'Pump stopped by the locked isolator; impeller cannot turn' },
+    { source: 'stored-pressure', reason: 'Section drained down to the open drain cock' },
+  ],
   points: [
     { assetId: plant.isolator.id, method: 'isolator-locked' },
     { assetId: plant.valve.id, method: 'valve-locked' },
@@ -52,15 +56,15 @@ const allChecks = { workComplete: true, guardsRefitted: true, personnelClear: tr
 const raise = async (who = 'engineer', body: object = isolation(), assetId = plant.pump.id) => {
   const res = await as(who).post(`/api/assets/${assetId}/tags`, body);
   expect(res.status).toBe(201);
-  return res.body as { id: number; status: string; author: { id: number } };
+  return res.body as { id: number; status: string; holder: { id: number } };
 };
 
 describe('POST /api/assets/:id/tags', () => {
-  it('raises an isolation with its points, sets the author from the session and records a raised event', async () => {
-    const res = await as('engineer').post(`/api/assets/${plant.pump.id}/tags`, { ...isolation(), author: { id: u.admin.id } });
+  it('raises an isolation with its points, sets the holder from the session and records a raised event', async () => {
+    const res = await as('engineer').post(`/api/assets/${plant.pump.id}/tags`, { ...isolation(), holder: { id: u.admin.id }, holderId: u.admin.id });
     expect(res.status).toBe(201);
     // OSHA 29 CFR 1910.147(c)(5)(ii)(D): lockout and tagout devices shall indicate the identity of the employee applying the device.
-    expect(res.body).toMatchObject({ kind: 'isolation', status: 'live', overdue: false, author: { id: u.engineer.id, name: 'alder engineer' }, assetId: plant.pump.id });
+    expect(res.body).toMatchObject({ kind: 'isolation', status: 'live', overdue: false, holder: { id: u.engineer.id, name: 'alder engineer' }, assetId: plant.pump.id });
     expect(res.body.points).toHaveLength(3);
     expect(res.body.points[0]).toMatchObject({ assetId: plant.isolator.id, method: 'isolator-locked', asset: { plantId: 'E-01' } });
     const detail = await as('viewer').get(`/api/tags/${res.body.id}`);
@@ -95,15 +99,17 @@ describe('POST /api/assets/:id/tags', () => {
     expect((await as('engineer').post(`/api/assets/${plant.pump.id}/tags`, isolation({ expiresAt: inHours(-1) }))).body.error.fields.expiresAt).toMatch(/future/);
     expect((await as('engineer').post(`/api/assets/${plant.pump.id}/tags`, isolation({ expiresAt: inHours(15 * 24) }))).body.error.fields.expiresAt).toMatch(/14 days/);
     expect((await as('supervisor').post(`/api/assets/${plant.pump.id}/tags`, isolation({ expiresAt: inHours(15 * 24) }))).status).toBe(201);
-    const gas = await as('engineer').post(`/api/assets/${plant.pump.id}/tags`, isolation({ energySources: ['gas'] }));
+    const gas = await as('engineer').post(`/api/assets/${plant.pump.id}/tags`, isolation({ energySources: ['electrical', 'hot-water', 'gas'] }));
     expect(gas.status).toBe(422);
     expect(gas.body.error.fields.energySources).toMatch(/gas/);
   });
 
-  it('creates one tag for a retried raise with the same Idempotency-Key, even when the retries race', async () => {
+  it('creates one tag for a retried raise with the same Idempotency-Key and body, even when the retries race', async () => {
     const before = await Tag.count();
     const key = { 'Idempotency-Key': 'raise-7f1c2b' };
-    const [a, b, c] = await Promise.all([1, 2, 3].map(() => as('engineer2').post(`/api/assets/${plant.valve.id}/tags`, isolation({ energySources: [], points: [{ description: 'Handle chained', method: 'valve-locked' }], kind: 'override', normalState: 'Open', leftState: 'Shut' }), key)));
+    // A retry sends the very same request again: same key, same body.
+    const body = isolation({ energySources: [], points: [{ description: 'Handle chained', method: 'valve-locked' }], kind: 'override', normalState: 'Open', leftState: 'Shut' });
+    const [a, b, c] = await Promise.all([1, 2, 3].map(() => as('engineer2').post(`/api/assets/${plant.valve.id}/tags`, body, key)));
     const ids = new Set([a.body.id, b.body.id, c.body.id]);
     expect(ids.size).toBe(1);
     expect([a.status, b.status, c.status].sort()).toEqual([200, 200, 201]);
@@ -170,24 +176,35 @@ describe('POST /api/tags/:id/clear-in-absence', () => {
     const tag = await raise('engineer2');
     const incomplete = await as('supervisor').post(`/api/tags/${tag.id}/clear-in-absence`, { reason: 'Holder off site, work finished', checks: allChecks });
     expect(incomplete.status).toBe(422);
-    expect(Object.keys(incomplete.body.error.fields)).toEqual(expect.arrayContaining(['authorNotOnSite', 'contactAttempts']));
-    expect((await as('engineer').post(`/api/tags/${tag.id}/clear-in-absence`, { reason: 'Holder off site, work finished', authorNotOnSite: true, contactAttempts: 'Phoned twice', checks: allChecks })).status).toBe(403);
+    expect(Object.keys(incomplete.body.error.fields)).toEqual(expect.arrayContaining(['holderNotOnSite', 'contactAttempts']));
+    expect((await as('engineer').post(`/api/tags/${tag.id}/clear-in-absence`, { reason: 'Holder off site, work finished', holderNotOnSite: true, contactAttempts: 'Phoned twice', checks: allChecks })).status).toBe(403);
     // OSHA 29 CFR 1910.147(e)(3)(i)–(iii): verification that the employee is not at the facility; all reasonable efforts to contact them; they are informed before resuming work.
     const ok = await as('supervisor').post(`/api/tags/${tag.id}/clear-in-absence`, {
       reason: 'Holder off site, work finished and verified',
-      authorNotOnSite: true,
+      holderNotOnSite: true,
       contactAttempts: 'Phoned 07700 900104 at 09:10 and 09:40, texted, asked the site office',
       checks: allChecks,
     });
     expect(ok.status).toBe(200);
     const detail = await as('engineer2').get(`/api/tags/${tag.id}`);
     const event = detail.body.events.at(-1);
-    expect(event).toMatchObject({ type: 'cleared-in-absence', by: { id: u.supervisor.id }, data: { authorNotOnSite: true, holderId: u.engineer2.id, holderToBeInformed: true } });
+    expect(event).toMatchObject({ type: 'cleared-in-absence', by: { id: u.supervisor.id }, data: { holderNotOnSite: true, holderId: u.engineer2.id, holderToBeInformed: true } });
     expect(event.data.contactAttempts).toMatch(/09:10/);
+    // OSHA 29 CFR 1910.147(e)(3)(iii): the holder is informed before resuming work; until they acknowledge, they take on nothing else.
+    const blocked = await as('engineer2').post(`/api/assets/${plant.pump.id}/tags`, isolation());
+    expect(blocked.status).toBe(409);
+    expect(blocked.body.error.code).toBe('acknowledge-first');
+    expect((await as('engineer2').get('/api/tag-notices')).body).toEqual([expect.objectContaining({ tagId: tag.id, kind: 'cleared-in-absence', by: { id: u.supervisor.id, name: 'alder supervisor' } })]);
+    expect((await as('engineer').post(`/api/tags/${tag.id}/acknowledge`, {})).status).toBe(409);
+    const ack = await as('engineer2').post(`/api/tags/${tag.id}/acknowledge`, {});
+    expect(ack.status).toBe(200);
+    expect(ack.body.events.at(-1)).toMatchObject({ type: 'acknowledged', by: { id: u.engineer2.id } });
+    expect((await as('engineer2').get('/api/tag-notices')).body).toEqual([]);
+    await expect(t.db.rootQuery('UPDATE tag_notices SET acknowledged_at = NULL WHERE tag_id = ?', [tag.id])).rejects.toThrow(/acknowledged, once/);
   });
 });
 
-describe('extend, hand over and notes', () => {
+describe('extend and notes', () => {
   it('extends by the holder or a supervisor, with a reason, and keeps both expiries in the history', async () => {
     const tag = await raise();
     const newExpiry = inHours(30);
@@ -202,20 +219,6 @@ describe('extend, hand over and notes', () => {
     expect(events[1].data).toMatchObject({ to: newExpiry, reason: 'Parts delayed until tomorrow' });
   });
 
-  it('hands an isolation over to the on-coming engineer in one step that records both people', async () => {
-    const tag = await raise('engineer');
-    // OSHA 29 CFR 1910.147(f)(4): continuity of lockout or tagout protection during shift or personnel changes, with orderly transfer between off-going and on-coming employees.
-    const res = await as('engineer2').post(`/api/tags/${tag.id}/handover`, { note: 'Taking over at shift change, lock L-117 swapped for L-204', lockNumber: 'L-204' });
-    expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ status: 'live', author: { id: u.engineer2.id }, raisedBy: { id: u.engineer.id }, lockNumber: 'L-204' });
-    const event = (await as('engineer2').get(`/api/tags/${tag.id}`)).body.events.at(-1);
-    expect(event).toMatchObject({ type: 'handed-over', data: { from: { id: u.engineer.id }, to: { id: u.engineer2.id } } });
-    // The off-going engineer no longer holds it and cannot clear it; the on-coming one can.
-    expect((await as('engineer').post(`/api/tags/${tag.id}/clear`, { reason: 'Clearing my old tag', checks: allChecks })).status).toBe(403);
-    expect((await as('engineer2').post(`/api/tags/${tag.id}/handover`, {})).status).toBe(409);
-    expect((await as('engineer2').post(`/api/tags/${tag.id}/clear`, { reason: 'Seal done, pump tested', checks: allChecks })).status).toBe(200);
-  });
-
   it('lets anyone but a viewer add a note to a live tag', async () => {
     const tag = await raise();
     expect((await as('engineer2').post(`/api/tags/${tag.id}/notes`, { text: 'Spare seal kit is in the store' })).status).toBe(201);
@@ -227,7 +230,7 @@ describe('extend, hand over and notes', () => {
 describe('state, overdue and history', () => {
   it('keeps a group isolation isolated until the last tag is cleared', async () => {
     const asset = plant.isolator.id;
-    const body = isolation({ energySources: ['electrical'], points: [{ description: 'DB-2 way 7', method: 'fuse-withdrawn' }] });
+    const body = isolation({ energySources: ['electrical'], omittedSources: [], points: [{ description: 'DB-2 way 7', method: 'fuse-withdrawn' }] });
     // OSHA 29 CFR 1910.147(f)(3): group lockout, each authorized employee with a personal device.
     const a = await raise('engineer', body, asset);
     const b = await raise('engineer2', body, asset);
@@ -250,7 +253,7 @@ describe('state, overdue and history', () => {
   it('answers 404 for another organisation’s tag', async () => {
     const tag = await raise();
     expect((await as('birch').get(`/api/tags/${tag.id}`)).status).toBe(404);
-    expect((await as('birch').post(`/api/tags/${tag.id}/clear-in-absence`, { reason: 'Not ours to clear', authorNotOnSite: true, contactAttempts: 'None at all, foreign', checks: allChecks })).status).toBe(404);
+    expect((await as('birch').post(`/api/tags/${tag.id}/clear-in-absence`, { reason: 'Not ours to clear', holderNotOnSite: true, contactAttempts: 'None at all, foreign', checks: allChecks })).status).toBe(404);
     expect((await as('birch').get('/api/tags?status=live')).body.total).toBe(0);
   });
 

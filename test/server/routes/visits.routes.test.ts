@@ -49,7 +49,9 @@ const override = {
 };
 const allChecks = { workComplete: true, guardsRefitted: true, personnelClear: true, testedSafe: true };
 const isolation = {
-  kind: 'isolation', reason: 'Seal change on heating pump 1', expiresAt: inHours(4), energySources: ['electrical'],
+  kind: 'isolation', reason: 'Seal change on heating pump 1', expiresAt: inHours(4), energySources: ['electrical'], lockNumber: 'PL-12',
+  proof: { method: 'absence-of-voltage', instrument: 'Two-pole tester TV-2', reading: '0 V' },
+  omittedSources: ['mechanical', 'hot-water', 'stored-pressure'].map((source) => ({ source, reason: 'Pump valved off both sides and drained down' })),
   points: [{ assetId: null as number | null, method: 'isolator-locked' }], contactPhone: '+44 7700 900555',
 };
 

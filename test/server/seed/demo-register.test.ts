@@ -92,6 +92,20 @@ describe('demo tags', () => {
     expect(tags.every((t) => t.status === 'live')).toBe(true);
     expect(tags.filter((t) => isOverdue(t, new Date())).length).toBe(2);
     expect(await TagEvent.count({ where: { type: 'raised' } })).toBe(3);
+    const { TagPoint } = await import('@/server/models/tag-point.model');
+    const isolations = tags.filter((t) => t.kind === 'isolation');
+    // common practice, no published source: a personal lock number must not be mistaken for a high-voltage switchgear reference.
+    expect(isolations.every((t) => t.lockNumber && !/^HV/i.test(t.lockNumber))).toBe(true);
+    expect(tags.some((t) => /flame failure/.test(t.reason)) && !tags.some((t) => /lockout/i.test(t.reason))).toBe(true);
+    // OSHA 29 CFR 1910.147(f)(3)(ii)(D): in a group isolation each authorized employee puts a personal device on the group mechanism (here: on every point).
+    const points = await TagPoint.findAll({ where: { tagId: isolations.map((t) => t.id) } });
+    const perTag = isolations.map((t) => points.filter((p) => p.tagId === t.id).map((p) => p.assetId ?? p.description).sort());
+    expect(perTag[0]).toEqual(perTag[1]);
+    expect(isolations.every((t) => points.filter((p) => p.tagId === t.id).every((p) => p.lockNumber === t.lockNumber))).toBe(true);
+    expect(points.some((p) => p.assetId !== null)).toBe(true);
+    // OSHA 29 CFR 1910.147(d)(6): each demo isolation carries a proof.
+    const { TagProof } = await import('@/server/models/tag-proof.model');
+    expect(await TagProof.count()).toBe(2);
     expect(await seedDemo(db.sequelize, { storage })).toBe(false);
     expect(await Tag.count()).toBe(3);
   });

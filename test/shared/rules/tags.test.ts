@@ -7,8 +7,10 @@ import {
   isDueSoon,
   isOverdue,
   mayExtend,
-  mayTakeOver,
+  mayReassignInAbsence,
 } from '@/shared/rules/tags';
+import { HANDOVER_OFFER_MINUTES, handoverRole, offerLapsesAt } from '@/shared/rules/tag-handover';
+import { sourcesNotAccounted } from '@/shared/rules/tag-isolation';
 import { clearInAbsenceSchema, clearTagSchema, raiseTagSchema } from '@/shared/schemas/tags';
 
 const now = new Date('2026-12-02T10:00:00Z');
@@ -18,7 +20,7 @@ const tag = (over: Partial<{ kind: 'isolation' | 'override'; status: 'live' | 'c
 
 describe('item state from its tags', () => {
   it('is isolated while any isolation is live, whatever the overrides', () => {
-    expect(assetStateFromTags([tag(), tag({ kind: 'override' })], now)).toEqual({ state: 'isolated', liveIsolations: 1, liveOverrides: 1, overdue: false });
+    expect(assetStateFromTags([tag(), tag({ kind: 'override' })], now)).toEqual({ state: 'isolated', liveIsolations: 1, liveOverrides: 1, unprovedIsolations: 1, overdue: false });
     expect(assetStateFromTags([tag({ kind: 'override' })], now).state).toBe('overridden');
     expect(assetStateFromTags([tag({ status: 'cleared' })], now).state).toBe('normal');
     expect(assetStateFromTags([], now).state).toBe('normal');
@@ -39,7 +41,7 @@ describe('item state from its tags', () => {
     // common practice, no published source: an expired tag keeps marking the hazard until a person removes it.
     const expired = tag({ expiresAt: '2026-12-01T17:00:00Z' });
     expect(isOverdue(expired, now)).toBe(true);
-    expect(assetStateFromTags([expired], now)).toEqual({ state: 'isolated', liveIsolations: 1, liveOverrides: 0, overdue: true });
+    expect(assetStateFromTags([expired], now)).toEqual({ state: 'isolated', liveIsolations: 1, liveOverrides: 0, unprovedIsolations: 1, overdue: true });
     expect(isOverdue({ ...expired, status: 'cleared' }, now)).toBe(false);
   });
 
@@ -66,14 +68,29 @@ describe('who may clear, extend and take over', () => {
     expect(clearancePermission({ id: 7, role: 'engineer' }, tag({ status: 'cleared' }))).toBe('none');
   });
 
-  it('lets the holder or a supervisor extend, and another person take over', () => {
+  it('lets the holder or a supervisor extend; a hand-over needs the holder’s offer and the named colleague’s acceptance', () => {
     expect(mayExtend({ id: 7, role: 'engineer' }, tag())).toBe(true);
     expect(mayExtend({ id: 8, role: 'engineer' }, tag())).toBe(false);
     expect(mayExtend({ id: 9, role: 'supervisor' }, tag())).toBe(true);
     // OSHA 29 CFR 1910.147(f)(4): specific procedures ensure the continuity of lockout or tagout protection during shift or personnel changes, including the orderly transfer between off-going and on-coming employees.
-    expect(mayTakeOver({ id: 8, role: 'engineer' }, tag())).toBe(true);
-    expect(mayTakeOver({ id: 7, role: 'engineer' }, tag())).toBe(false);
-    expect(mayTakeOver({ id: 8, role: 'viewer' }, tag())).toBe(false);
+    const offered = { ...tag(), toUserId: 8, lapsesAt: offerLapsesAt(now) };
+    expect(handoverRole({ id: 7, role: 'engineer' }, offered, now)).toBe('holder');
+    expect(handoverRole({ id: 8, role: 'engineer' }, offered, now)).toBe('offered');
+    expect(handoverRole({ id: 9, role: 'supervisor' }, offered, now)).toBe('none');
+    expect(handoverRole({ id: 8, role: 'engineer' }, { ...tag(), toUserId: null, lapsesAt: null }, now)).toBe('none');
+    const later = new Date(now.getTime() + HANDOVER_OFFER_MINUTES * 60_000 + 1);
+    expect(handoverRole({ id: 8, role: 'engineer' }, offered, later)).toBe('none');
+    // OSHA 29 CFR 1910.147(e)(3)(i)–(iii): moving someone else's tag is a supervisor's absence procedure.
+    expect(mayReassignInAbsence({ id: 9, role: 'supervisor' }, tag())).toBe(true);
+    expect(mayReassignInAbsence({ id: 8, role: 'engineer' }, tag())).toBe(false);
+    expect(mayReassignInAbsence({ id: 7, role: 'supervisor' }, tag())).toBe(false);
+  });
+
+  it('accounts for every energy source of the item: isolated, or left out with a reason of 10 characters or more', () => {
+    // OSHA 29 CFR 1910.147(d)(3)–(d)(4): every energy isolating device needed to control the energy is operated and locked.
+    expect(sourcesNotAccounted(['gas', 'electrical', 'hot-water'], ['electrical'], [])).toEqual(['gas', 'hot-water']);
+    expect(sourcesNotAccounted(['gas', 'electrical', 'hot-water'], ['electrical', 'gas'], [{ source: 'hot-water', reason: 'drained down' }])).toEqual([]);
+    expect(sourcesNotAccounted(['gas', 'hot-water'], ['gas'], [{ source: 'hot-water', reason: ' cold     ' }])).toEqual(['hot-water']);
   });
 });
 
@@ -95,7 +112,7 @@ describe('expiry and reasons', () => {
   it('shares the same limits in the yup schemas the form and the server use', async () => {
     await expect(clearTagSchema.validate({ reason: '  too short ' })).rejects.toThrow(/At least 10/);
     await expect(clearTagSchema.validate({ reason: 'Pump seal replaced, tested' })).resolves.toMatchObject({ checks: { workComplete: false } });
-    await expect(clearInAbsenceSchema.validate({ reason: 'Holder on leave, work done', authorNotOnSite: false, contactAttempts: 'Phoned twice at 09:00' })).rejects.toThrow(/not on site/);
+    await expect(clearInAbsenceSchema.validate({ reason: 'Holder on leave, work done', holderNotOnSite: false, contactAttempts: 'Phoned twice at 09:00' })).rejects.toThrow(/not on site/);
   });
 
   it('asks an isolation for energy sources and points, an override for its normal and left states', async () => {

@@ -1,0 +1,37 @@
+import { View } from 'react-native';
+import { space } from '@/components/theme';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { ActionStatusNotice, type ActionStatus } from '@/components/tags/action-support';
+import { errorMessage, RequestError } from '@/hooks/api/request';
+import { useAcknowledgeTagMutation, useTagNoticesQuery } from '@/hooks/api/use-tags';
+import type { TagNotice } from '@/shared/types/tags';
+
+function NoticeRow({ notice }: { notice: TagNotice }) {
+  const ack = useAcknowledgeTagMutation(notice.tagId);
+  const what = notice.kind === 'cleared-in-absence' ? 'cleared' : 'moved to a colleague';
+  const failure: ActionStatus | undefined = ack.error ? { status: ack.error instanceof RequestError ? ack.error.status : 0, message: errorMessage(ack.error) } : undefined;
+  return (
+    <View style={{ gap: space.sm }} testID={`tag-notice-${notice.tagId}`}>
+      <Notice tone="danger" word="While you were away">
+        {`${notice.by.name} ${what} your tag on ${notice.asset.plantId} ${notice.asset.name}: “${notice.reason}”. Your lock may have been removed. Speak to them and check the plant before you resume any work.`}
+      </Notice>
+      <ActionStatusNotice status={failure} />
+      <Button title="I have read this" variant="primary" busy={ack.isPending} onPress={() => ack.mutate({})} testID={`tag-notice-ack-${notice.tagId}`} />
+    </View>
+  );
+}
+
+/**
+ * Tags of the signed-in person cleared or reassigned in their absence (OSHA 29 CFR 1910.147(e)(3)(iii)). Until each
+ * is acknowledged the server refuses them any raise, clearance, extension or hand-over.
+ */
+export function TagNoticesBanner() {
+  const notices = useTagNoticesQuery();
+  if (!notices.data?.length) return null;
+  return (
+    <View style={{ gap: space.md }} testID="tag-notices">
+      {notices.data.map((n) => <NoticeRow key={n.id} notice={n} />)}
+    </View>
+  );
+}
