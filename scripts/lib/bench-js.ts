@@ -7,6 +7,7 @@ import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { webStatic } from '@/server/lib/web-static';
+import { precompress } from '@/scripts/lib/precompress';
 import { CHROMIUM, CHROMIUM_ARGS } from '@/test/e2e/support/browser';
 
 const ROOT = path.resolve(__dirname, '../..');
@@ -55,6 +56,8 @@ export function buildBlankApp(log: (line: string) => void): string {
     env: { ...process.env, EXPO_OFFLINE: '1', CI: '1', EXPO_NO_TELEMETRY: '1', NODE_ENV: 'production' },
   });
   if (result.status !== 0) throw new Error('the near-blank app did not build');
+  // Compressed like ours, so the bytes on the wire compare too.
+  precompress(path.join(BLANK, 'dist'));
   return path.join(BLANK, 'dist');
 }
 
