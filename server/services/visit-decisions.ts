@@ -3,6 +3,7 @@ import { clock } from '@/server/lib/clock';
 import { HttpError } from '@/server/lib/http-error';
 import type { AuthUser } from '@/server/middleware/auth';
 import { addTagNote, clearTag, extendTag } from '@/server/services/tag-actions.service';
+import { offerHandover } from '@/server/services/tag-handover.service';
 import { MIN_CLEARANCE_REASON, RELEASE_CHECKS, expiryProblem } from '@/shared/rules/tags';
 import { decisionProblem } from '@/shared/rules/visits';
 import type { VisitDecisionInput } from '@/shared/schemas/visits';
@@ -55,6 +56,8 @@ export async function carryOutDecisions(sequelize: Sequelize, actor: AuthUser, h
         await extendTag(sequelize, actor, tag.id, { expiresAt: new Date(d.expiresAt), reason: d.note || 'Left in place at the end of a visit.' });
       }
       if (d.note) await addTagNote(sequelize, actor, tag.id, `Left in place at the end of a visit: ${d.note}`);
+    } else if (d.toUserId) {
+      await offerHandover(sequelize, actor, tag.id, { toUserId: d.toUserId, note: d.note }, null);
     } else {
       await addTagNote(sequelize, actor, tag.id, `Offered in hand-over at the end of a visit${d.note ? `: ${d.note}` : '.'}`);
     }

@@ -15,6 +15,8 @@ export const visitDecisionSchema = yup.object({
   note: yup.string().trim().max(2000).default(''),
   /** Leave only: a new expiry for the tag left in place; omitted keeps the one it has. */
   expiresAt: yup.date().typeError('Give a valid expiry date and time.').nullable().default(null),
+  /** Hand-over only: the colleague offered the tag; without one the decision is recorded as a note on the tag. */
+  toUserId: yup.number().integer().positive().nullable().default(null),
   /** Clear only, for an isolation: the release checks (OSHA 29 CFR 1910.147(e)(1)–(e)(2)). */
   checks: yup.object(Object.fromEntries(RELEASE_CHECKS.map((k) => [k, yup.boolean().default(false)]))).default({}),
 });

@@ -244,10 +244,12 @@ describe('end-of-visit summary to the site’s client contact', () => {
     await plant.site.update({ clientContactEmail: 'estates@hazel-primary.test', clientContactName: 'Estates office' });
     const open = await as('engineer2').get('/api/me/visit');
     const held = await as('engineer2').get('/api/me/tags');
-    const decisions = held.body.items.map((t: { id: number }) => ({ tagId: t.id, action: 'leave', note: 'Valve left open for venting until tomorrow' }));
+    const decisions = held.body.items.map((t: { id: number }) => ({ tagId: t.id, action: 'handover', toUserId: u.engineer.id, note: 'Valve left open for venting until tomorrow' }));
     await Organisation.update({ visitSummaryToClient: true }, { where: { id: u.engineer2.organisationId } });
     const res = await as('engineer2').post(`/api/visits/${open.body.visit.id}/end`, { decisions });
     expect(res.status).toBe(200);
+    // OSHA 29 CFR 1910.147(f)(4): continuity at a change of personnel; the tag is offered to a named colleague.
+    expect((await Tag.findByPk(held.body.items[0].id))!.offerToId).toBe(u.engineer.id);
     const toClient = await outboxRows(env.t, "kind = 'visit-summary' AND to_email = 'estates@hazel-primary.test'");
     expect(toClient).toHaveLength(1);
     expect(toClient[0].payload).toMatchObject({ forClient: true, recipientName: 'Estates office' });
