@@ -2,7 +2,9 @@ import mariadb from 'mariadb';
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { APPEND_ONLY_TABLES, privilegesFor } from '@/server/db-privileges';
-import { setupTestApp, type TestApp } from '@/test/setup/app';
+import { createOrganisation, setupTestApp, type TestApp } from '@/test/setup/app';
+import { createSiteWithAssets } from '@/test/setup/register-fixtures';
+import { insertTag } from '@/test/server/support/tag-fixtures';
 
 // Every statement here runs on t.db.sequelize: the server's own account, exactly as the running product connects.
 let t: TestApp;
@@ -40,6 +42,22 @@ describe("the server's database account", () => {
     await run("INSERT INTO audit_events (type, created_at) VALUES ('sign-in', NOW(3))");
     const [row] = await t.db.rootQuery<{ n: number }[]>("SELECT COUNT(*) AS n FROM audit_events WHERE type = 'sign-in'");
     expect(Number(row.n)).toBe(1);
+  });
+
+  it("cannot rewrite a tag's reason or holder's story, nor bring a cleared tag back to live", async () => {
+    const { organisation, users } = await createOrganisation('priv');
+    const { boiler } = await createSiteWithAssets(organisation.id, users.admin.id);
+    const now = new Date();
+    const live = await insertTag({ organisationId: organisation.id, assetId: boiler.id, holderId: users.engineer.id, now, expiresInHours: 4 });
+    const cleared = await insertTag({ organisationId: organisation.id, assetId: boiler.id, holderId: users.engineer.id, now, expiresInHours: 4, status: 'cleared' });
+    // OSHA 29 CFR 1910.147(c)(5)(ii)(D): the device identifies who applied it and why; the record of it must not be rewritten
+    await expect(run(`UPDATE tags SET reason = 'nothing to see' WHERE id = ${live.id}`)).rejects.toThrow(/identity/);
+    await expect(run(`UPDATE tags SET raised_by_id = ${users.engineer2.id} WHERE id = ${live.id}`)).rejects.toThrow(/identity/);
+    // OSHA 29 CFR 1910.147(e)(3): once released, a tag is not put back without a new application
+    await expect(run(`UPDATE tags SET status = 'live' WHERE id = ${cleared.id}`)).rejects.toThrow(/cleared/);
+    await expect(run(`DELETE FROM tags WHERE id = ${live.id}`)).rejects.toThrow();
+    const rows = await t.db.rootQuery<{ reason: string; status: string }[]>('SELECT reason, status FROM tags WHERE id IN (?, ?) ORDER BY id', [live.id, cleared.id]);
+    expect(rows.map((r) => [r.reason, r.status])).toEqual([['Planned maintenance', 'live'], ['Planned maintenance', 'cleared']]);
   });
 
   it('holds no DDL: no CREATE, ALTER or DROP of tables, and no LOCK TABLES', async () => {
