@@ -8,6 +8,8 @@ import { LiveTagsPanel } from '@/components/places/live-tags-panel';
 import { agoPhrase } from '@/components/tags/tag-time';
 import { useNow } from '@/components/tags/use-now';
 import { useMyTagsQuery, useMyVisitQuery, useRecentPlacesQuery } from '@/hooks/api/use-me';
+import { useTagsQuery } from '@/hooks/api/use-tags';
+import { TagNoticesBanner } from '@/components/tags/tag-notices-banner';
 import type { RecentPlace } from '@/shared/types/visits';
 
 function PlaceRow({ place, now }: { place: RecentPlace; now: Date }) {
@@ -31,10 +33,17 @@ export function EngineerHome() {
   const now = useNow();
   const visit = useMyVisitQuery();
   const tags = useMyTagsQuery();
+  const offers = useTagsQuery({ offeredTo: 'me' });
   const places = useRecentPlacesQuery();
   const v = visit.data;
   return (
     <View style={{ gap: space.lg }}>
+      <TagNoticesBanner />
+      {offers.data?.items.length ? (
+        <View testID="home-handover-offers">
+          <LiveTagsPanel tags={offers.data.items} now={now} title="Offered to you in hand-over" empty="" />
+        </View>
+      ) : null}
       {v ? (
         <Link href={`/visits/${v.id}` as never} asChild>
           <Pressable style={styles.visit} accessibilityRole="link" testID="home-visit">

@@ -4,10 +4,12 @@ import { Card } from '@/components/ui/card';
 import { Chip } from '@/components/ui/chip';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
+import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { multilineStyle } from '@/components/tags/form-pieces';
 import { KIND_LOOK } from '@/components/tags/tag-vocabulary';
 import { expiryPhrase, formatInZone } from '@/components/tags/tag-time';
+import { useTagColleaguesQuery } from '@/hooks/api/use-tags';
 import { RELEASE_CHECKS, RELEASE_CHECK_LABELS, type ReleaseCheck } from '@/shared/rules/tags';
 import { VISIT_DECISION_ACTIONS, VISIT_DECISION_LABELS, type VisitDecisionAction } from '@/shared/rules/visits';
 import type { Tag } from '@/shared/types/tags';
@@ -16,6 +18,8 @@ export interface DecisionDraft {
   action: VisitDecisionAction | null;
   note: string;
   checks: Partial<Record<ReleaseCheck, boolean>>;
+  /** The colleague offered the tag in hand-over. */
+  toUserId?: number | null;
 }
 
 const ICONS = { leave: 'tag-outline', handover: 'account-switch', clear: 'lock-open-check-outline' } as const;
@@ -29,6 +33,8 @@ function noteLabel(tag: Tag, action: VisitDecisionAction | null) {
 /** One live tag the engineer holds: leave it, offer it in hand-over, or clear it — with the words that go with it. */
 export function DecisionCard({ tag, draft, error, now, onChange }: { tag: Tag; draft: DecisionDraft; error?: string; now: Date; onChange: (d: DecisionDraft) => void }) {
   const kind = KIND_LOOK[tag.kind];
+  const colleagues = useTagColleaguesQuery(draft.action === 'handover');
+  const options = (colleagues.data ?? []).filter((c) => c.id !== tag.holder.id).map((c) => ({ value: c.id, label: c.name }));
   return (
     <Card>
       <View testID={`decision-${tag.id}`} style={{ gap: space.sm }}>
@@ -50,7 +56,10 @@ export function DecisionCard({ tag, draft, error, now, onChange }: { tag: Tag; d
           </View>
         ) : null}
         {draft.action === 'handover' ? (
-          <Notice tone="info" word="Hand-over">You stay the holder until someone accepts the tag on site. Tell them in person as well.</Notice>
+          <View style={{ gap: space.sm }}>
+            <SelectField<number> label="Colleague taking over" value={draft.toUserId ?? null} options={options} onChange={(v) => onChange({ ...draft, toUserId: v })} placeholder="Choose a colleague…" testID={`decision-${tag.id}-to`} />
+            <Notice tone="info" word="Hand-over">You stay the holder until your colleague accepts the tag on site with their own lock on. Tell them in person as well.</Notice>
+          </View>
         ) : null}
       </View>
     </Card>

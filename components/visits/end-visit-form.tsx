@@ -34,7 +34,7 @@ export function EndVisitForm({ visit, held, onEnded, onCancel }: { visit: Visit;
     setFields({});
     const decisions = held
       .filter((t) => drafts[t.id]?.action)
-      .map((t) => ({ tagId: t.id, action: drafts[t.id].action!, note: drafts[t.id].note.trim(), checks: drafts[t.id].checks, expiresAt: null, toUserId: null }));
+      .map((t) => ({ tagId: t.id, action: drafts[t.id].action!, note: drafts[t.id].note.trim(), checks: drafts[t.id].checks, expiresAt: null, toUserId: drafts[t.id].action === 'handover' ? drafts[t.id].toUserId ?? null : null }));
     try {
       await end.mutateAsync({ decisions, note: note.trim() });
       onEnded();

@@ -31,6 +31,9 @@ export function checkDecisions(held: TagDto[], decisions: VisitDecisionInput[], 
     if (problem) fields[`tags.${d.tagId}`] = `${label(tag)}: ${problem}`;
     else if (d.action === 'clear' && tag.kind === 'isolation' && RELEASE_CHECKS.some((k) => !d.checks?.[k])) {
       fields[`tags.${d.tagId}`] = `${label(tag)}: confirm every release check before clearing an isolation.`;
+    } else if (d.action === 'handover' && !d.toUserId) {
+      // OSHA 29 CFR 1910.147(f)(4): a hand-over is to a named on-coming person, who accepts it on site.
+      fields[`tags.${d.tagId}`] = `${label(tag)}: name the colleague you offer it to.`;
     } else if (d.action === 'leave' && d.expiresAt) {
       const expiry = expiryProblem(new Date(d.expiresAt), clock.now(), actor.role);
       if (expiry) fields[`tags.${d.tagId}`] = `${label(tag)}: ${expiry}`;
@@ -56,10 +59,8 @@ export async function carryOutDecisions(sequelize: Sequelize, actor: AuthUser, h
         await extendTag(sequelize, actor, tag.id, { expiresAt: new Date(d.expiresAt), reason: d.note || 'Left in place at the end of a visit.' });
       }
       if (d.note) await addTagNote(sequelize, actor, tag.id, `Left in place at the end of a visit: ${d.note}`);
-    } else if (d.toUserId) {
-      await offerHandover(sequelize, actor, tag.id, { toUserId: d.toUserId, note: d.note }, null);
     } else {
-      await addTagNote(sequelize, actor, tag.id, `Offered in hand-over at the end of a visit${d.note ? `: ${d.note}` : '.'}`);
+      await offerHandover(sequelize, actor, tag.id, { toUserId: d.toUserId!, note: d.note }, null);
     }
   }
 }

@@ -263,6 +263,12 @@ describe('isolation tags on a plant item', () => {
     await expect(text(off.page, 'tag-holder')).resolves.toBe('Kofi Marchetti');
     await screenshot(off.page, 'tags-handover-offered-holder-phone');
 
+    // The on-coming engineer's home lists the offer waiting for them, and any acknowledgement they owe.
+    await on.page.goto(`${baseUrl}/`);
+    await on.page.getByTestId('home-handover-offers').waitFor();
+    await expect(text(on.page, 'home-handover-offers')).resolves.toMatch(/Offered to you in hand-over[\s\S]*Rewire the boiler house panel/);
+    await screenshot(on.page, 'home-handover-offer-phone');
+
     // The on-coming engineer's phone. Their own tag was cleared in their absence earlier: they acknowledge that first.
     await on.page.goto(`${baseUrl}/tags/${tag.id}`);
     await on.page.getByTestId('tag-header').waitFor();

@@ -246,6 +246,11 @@ describe('end-of-visit summary to the site’s client contact', () => {
     const held = await as('engineer2').get('/api/me/tags');
     const decisions = held.body.items.map((t: { id: number }) => ({ tagId: t.id, action: 'handover', toUserId: u.engineer.id, note: 'Valve left open for venting until tomorrow' }));
     await Organisation.update({ visitSummaryToClient: true }, { where: { id: u.engineer2.organisationId } });
+    // OSHA 29 CFR 1910.147(f)(4): a hand-over names the on-coming person; without one the visit does not end.
+    const unnamed = await as('engineer2').post(`/api/visits/${open.body.visit.id}/end`, { decisions: decisions.map((d: object) => ({ ...d, toUserId: null })) });
+    expect(unnamed.status).toBe(422);
+    expect(Object.values(unnamed.body.error.fields).join(' ')).toMatch(/name the colleague/);
+    expect((await as('engineer2').get('/api/me/visit')).body.visit.id).toBe(open.body.visit.id);
     const res = await as('engineer2').post(`/api/visits/${open.body.visit.id}/end`, { decisions });
     expect(res.status).toBe(200);
     // OSHA 29 CFR 1910.147(f)(4): continuity at a change of personnel; the tag is offered to a named colleague.
