@@ -198,7 +198,8 @@ describe('two app servers on a three-node Galera cluster', () => {
 
     // The launcher restarts node3; it rejoins by IST (or SST) and is Synced again.
     let state = '';
-    for (let i = 0; i < 120 && state !== 'Synced'; i++) {
+    // The launcher sees it ready on its own next probe, which may come a moment after the node answers Synced.
+    for (let i = 0; i < 120 && !(state === 'Synced' && cluster.galera.nodes[2].status().up); i++) {
       await new Promise((r) => setTimeout(r, 500));
       state = await onNode<{ Value: string }[]>(2, "SHOW GLOBAL STATUS LIKE 'wsrep_local_state_comment'").then((rows) => rows[0]?.Value ?? '', () => '');
     }
