@@ -91,6 +91,8 @@ describe('isolation tags on a plant item', () => {
     await page.getByTestId('point-0-chosen').waitFor();
     await page.getByTestId('point-0-method').click();
     await page.getByRole('radio', { name: 'Isolator locked off' }).click();
+    // The choice closes its dialog before the next point's is opened.
+    await page.getByRole('radio', { name: 'Isolator locked off' }).waitFor({ state: 'detached', timeout: 5000 });
     await page.getByTestId('add-point').click();
     await page.getByTestId('point-1-mode-text').click();
     await page.getByTestId('point-1-description').fill('Isolation valves either side of the pump');
