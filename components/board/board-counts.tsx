@@ -24,7 +24,7 @@ export function BoardCounts({ counts, siteId, state, onSite, onState }: Props) {
     <View style={{ gap: space.sm }} testID="board-counts">
       <View style={styles.tiles}>
         <Tile label="Live tags" value={counts.total} icon="tag-multiple-outline" selected={!state && !siteId} onPress={() => { onState(null); onSite(null); }} testID="count-total" />
-        <Tile label="Overdue" value={counts.overdue} icon={BOARD_STATE_LOOK.overdue.icon} alert={counts.overdue > 0} selected={state === 'overdue'} onPress={() => onState(state === 'overdue' ? null : 'overdue')} testID="count-overdue" />
+        <Tile label="Past expiry" value={counts.overdue} icon={BOARD_STATE_LOOK.overdue.icon} alert={counts.overdue > 0} selected={state === 'overdue'} onPress={() => onState(state === 'overdue' ? null : 'overdue')} testID="count-overdue" />
         <Tile label="Due within 24 h" value={counts.dueSoon} icon={BOARD_STATE_LOOK['due-soon'].icon} selected={state === 'due-soon'} onPress={() => onState(state === 'due-soon' ? null : 'due-soon')} testID="count-due-soon" />
       </View>
       {counts.notProved ? (
