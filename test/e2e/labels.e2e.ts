@@ -48,7 +48,9 @@ describe('opening an item from its label URL', () => {
 
   it('shows "No such label" for a retired, an unknown and a malformed code', async () => {
     const valve = (await api<{ items: Asset[] }>(baseUrl, token, '/assets?type=valve&pageSize=1')).items[0];
-    const { retiredCode } = await api<{ retiredCode: string }>(baseUrl, token, `/assets/${valve.id}/label/replace`, { method: 'POST' });
+    // A supervisor replaces the label (engineers may replace labels only on items they may edit).
+    const supervisor = await apiToken(baseUrl, 'supervisor@example.test');
+    const { retiredCode } = await api<{ retiredCode: string }>(baseUrl, supervisor, `/assets/${valve.id}/label/replace`, { method: 'POST' });
     const { page, context } = await openPage(session.browser, PHONE);
     await page.goto(`${baseUrl}/sign-in`);
     await signInHere(page, 'engineer@example.test');
