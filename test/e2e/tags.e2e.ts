@@ -1,6 +1,5 @@
-import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { DESKTOP, PHONE, launch, openPage, screenshot, signIn, type Session, type WatchedPage } from '@/test/e2e/support/browser';
+import { DESKTOP, PHONE, launch, expectClean, openSignedIn, screenshot, testIdText, type Session } from '@/test/e2e/support/browser';
 import type { Asset } from '@/shared/types/register';
 import type { Tag } from '@/shared/types/tags';
 import type { ListResponse } from '@/shared/types/user';
@@ -19,19 +18,9 @@ async function api<T>(path: string, token: string | null, body?: object): Promis
 }
 const login = async (email: string) => (await api<{ token: string }>('/auth/login', null, { email, password: 'isoledger-demo' })).token;
 
-async function signedIn(viewport: { width: number; height: number }, email: string, role: string): Promise<WatchedPage> {
-  const watched = await openPage(session.browser, viewport);
-  await signIn(watched.page, baseUrl, email);
-  await watched.page.getByTestId(`home-${role}`).waitFor();
-  return watched;
-}
-
-const text = (page: Page, testId: string) => page.getByTestId(testId).innerText();
-
-function clean(w: WatchedPage) {
-  expect(w.errors).toEqual([]);
-  expect(w.offsite).toEqual([]);
-}
+const signedIn = (viewport: { width: number; height: number }, email: string, role: string) => openSignedIn(session.browser, baseUrl, viewport, email, role);
+const text = testIdText;
+const clean = expectClean;
 
 let pump: Asset;
 let isolator: Asset;

@@ -2,9 +2,8 @@ import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { DESKTOP, PHONE, SCREENSHOTS, launch, openPage, screenshot, signIn, type Session, type WatchedPage } from '@/test/e2e/support/browser';
+import { DESKTOP, PHONE, SCREENSHOTS, launch, expectClean, openSignedIn, screenshot, testIdText, type Session } from '@/test/e2e/support/browser';
 import { api, apiToken } from '@/test/e2e/support/api';
 import type { Asset, PlantRoom, Site } from '@/shared/types/register';
 import type { Tag } from '@/shared/types/tags';
@@ -20,18 +19,9 @@ let castellanRoom: PlantRoom;
 let quillmere: Site;
 let pump: Asset;
 
-async function signedIn(viewport: { width: number; height: number }, email: string, role: string): Promise<WatchedPage> {
-  const watched = await openPage(session.browser, viewport);
-  await signIn(watched.page, baseUrl, email);
-  await watched.page.getByTestId(`home-${role}`).waitFor();
-  return watched;
-}
-const text = (page: Page, testId: string) => page.getByTestId(testId).innerText();
-/** No console errors but the expected ones (the browser logs a refused request as an error). */
-function clean(w: WatchedPage, expected: RegExp[] = []) {
-  expect(w.errors.filter((e) => !expected.some((re) => re.test(e)))).toEqual([]);
-  expect(w.offsite).toEqual([]);
-}
+const signedIn = (viewport: { width: number; height: number }, email: string, role: string) => openSignedIn(session.browser, baseUrl, viewport, email, role);
+const text = testIdText;
+const clean = expectClean;
 
 async function mailTo(address: string, subject: RegExp) {
   for (let i = 0; i < 40; i++) {

@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { expect } from 'vitest';
 
 export const CHROMIUM = '/usr/bin/chromium';
 
@@ -71,4 +72,21 @@ export async function signIn(page: Page, baseUrl: string, email: string, passwor
   await page.getByTestId('sign-in-email').fill(email);
   await page.getByTestId('sign-in-password').fill(password);
   await page.getByTestId('sign-in-submit').click();
+}
+
+/** A fresh page signed in as `email`, waiting until the home screen for `role` shows. */
+export async function openSignedIn(browser: Browser, baseUrl: string, viewport: { width: number; height: number }, email: string, role: string): Promise<WatchedPage> {
+  const watched = await openPage(browser, viewport);
+  await signIn(watched.page, baseUrl, email);
+  await watched.page.getByTestId(`home-${role}`).waitFor();
+  return watched;
+}
+
+/** The visible text of the element with this test id. */
+export const testIdText = (page: Page, testId: string) => page.getByTestId(testId).innerText();
+
+/** No console errors but the expected ones (the browser logs a refused request as an error), and nothing fetched off site. */
+export function expectClean(w: WatchedPage, expected: RegExp[] = []) {
+  expect(w.errors.filter((e) => !expected.some((re) => re.test(e)))).toEqual([]);
+  expect(w.offsite).toEqual([]);
 }
