@@ -9,7 +9,7 @@ import { copyZxingWasm } from '@/scripts/lib/zxing-wasm';
 const ROOT = path.resolve(__dirname, '../..');
 const DIST = path.join(ROOT, 'dist');
 const STAMP = path.join(DIST, '.source-hash');
-const SOURCES = ['app', 'components', 'hooks', 'shared', 'assets', 'app.json', 'package-lock.json', 'metro.config.js', 'babel.config.js', 'scripts/lib/web-build.ts', 'scripts/lib/zxing-wasm.ts', 'scripts/lib/precompress.ts', 'scripts/lib/web-offline.ts'];
+const SOURCES = ['app', 'components', 'hooks', 'shared', 'assets', 'app.json', 'package-lock.json', 'metro.config.js', 'babel.config.js', 'scripts/metro', 'scripts/lib/web-build.ts', 'scripts/lib/zxing-wasm.ts', 'scripts/lib/precompress.ts', 'scripts/lib/web-offline.ts'];
 
 function hashTree(hash: crypto.Hash, target: string) {
   if (!fs.existsSync(target)) return;

@@ -12,13 +12,10 @@ import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { lazyPart } from '@/components/ui/lazy-part';
-import { ConnectionsCard } from '@/components/connections/connections-card';
 import { ItemOffline } from '@/components/offline/pending-actions';
-import { AssetReadingsSection } from '@/components/readings/asset-readings-section';
 import { AssetDetails } from '@/components/register/asset-details';
 import { AssetStateSlot } from '@/components/register/asset-state-slot';
 import { Breadcrumbs } from '@/components/register/breadcrumbs';
-import { PhotoGallery } from '@/components/register/photo-gallery';
 import { ASSET_TYPE_ICONS } from '@/components/register/register-vocabulary';
 import { errorMessage } from '@/hooks/api/request';
 import { useAddAssetPhotoMutation, useArchiveAssetMutation, useAssetQuery } from '@/hooks/api/use-assets';
@@ -27,7 +24,11 @@ import { useNow } from '@/components/tags/use-now';
 import { VisitBanner } from '@/components/visits/visit-banner';
 import { ASSET_TYPE_LABELS } from '@/shared/rules/register';
 
-const AssetLabelCard = lazyPart(() => import('@/components/labels/asset-label-card').then((m) => m.AssetLabelCard));
+const AssetLabelCard = lazyPart(() => import('@/components/labels/asset-label-card').then((m) => m.AssetLabelCard), { deferred: true });
+// Below the item's state: fetched once the record has rendered, so a scanned label shows its state first.
+const ConnectionsCard = lazyPart(() => import('@/components/connections/connections-card').then((m) => m.ConnectionsCard), { deferred: true });
+const AssetReadingsSection = lazyPart(() => import('@/components/readings/asset-readings-section').then((m) => m.AssetReadingsSection), { deferred: true });
+const PhotoGallery = lazyPart(() => import('@/components/register/photo-gallery').then((m) => m.PhotoGallery), { deferred: true });
 
 export default function AssetScreen() {
   const id = Number(useLocalSearchParams<{ id: string }>().id);
