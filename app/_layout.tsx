@@ -1,4 +1,3 @@
-import { AtkinsonHyperlegible_400Regular, AtkinsonHyperlegible_700Bold } from '@expo-google-fonts/atkinson-hyperlegible';
 import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { useFonts } from 'expo-font';
 import { Slot } from 'expo-router';
@@ -19,8 +18,6 @@ export default function RootLayout() {
     AtkinsonHyperlegible_700Bold: require('@/assets/fonts/AtkinsonHyperlegible_700Bold.ttf'),
     ...MaterialCommunityIcons.font,
   });
-  void AtkinsonHyperlegible_400Regular;
-  void AtkinsonHyperlegible_700Bold;
   useEffect(registerServiceWorker, []);
   return (
     <SafeAreaProvider>
