@@ -4,7 +4,7 @@ import { notFound, unprocessable } from '@/server/lib/http-error';
 import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
 import { ProcedureReview } from '@/server/models/procedure-review.model';
 import { User } from '@/server/models/user.model';
-import { findSite } from '@/server/services/register-access';
+import { findSite } from '@/server/services/register.lookup';
 import { visibleSiteIds } from '@/server/services/site-access.service';
 import { isReviewOverdue, reviewDueOn } from '@/shared/rules/procedure-review';
 import { localDate } from '@/shared/rules/time-zone';

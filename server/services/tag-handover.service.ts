@@ -1,13 +1,13 @@
+/** Moving a live tag to another holder: offer, withdraw and accept between two people present, or reassignment in the holder's absence. */
 import type { Sequelize, Transaction } from 'sequelize';
 import { clock } from '@/server/lib/clock';
 import { HttpError, forbidden, unprocessable } from '@/server/lib/http-error';
 import type { AuthUser } from '@/server/middleware/auth';
 import type { Tag } from '@/server/models/tag.model';
 import { User } from '@/server/models/user.model';
-import { appendEvent } from '@/server/services/tag-events';
-import type { Idempotency } from '@/server/services/tag-idempotency';
+import { appendEvent, type Idempotency } from '@/server/services/tag-history.service';
 import { createNotice, requireNoPendingNotices } from '@/server/services/tag-notices.service';
-import { actOnTag } from '@/server/services/tags.service';
+import { actOnTag } from '@/server/services/tag-actions.service';
 import { enqueueTagMail } from '@/server/mail/tag-mail';
 import { handoverRole, offerIsOpen, offerLapsesAt } from '@/shared/rules/tag-handover';
 import { mayReassignInAbsence } from '@/shared/rules/tags';
