@@ -2,7 +2,7 @@
 import type { Sequelize, Transaction } from 'sequelize';
 import { clock } from '@/server/lib/clock';
 import { HttpError, forbidden, notFound, unprocessable } from '@/server/lib/http-error';
-import type { AuthUser } from '@/server/middleware/auth';
+import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
 import type { PhotoStorage } from '@/server/lib/photo-storage';
 import { Tag } from '@/server/models/tag.model';
 import { TagProof } from '@/server/models/tag-proof.model';
@@ -11,7 +11,8 @@ import { appendEvent, once, type Idempotency } from '@/server/services/tag-histo
 import { createNotice, requireNoPendingNotices } from '@/server/services/tag-notices.service';
 import { getTag } from '@/server/services/tags.service';
 import { enqueueTagMail } from '@/server/mail/tag-mail';
-import { clearancePermission, expiryProblem, mayExtend } from '@/shared/rules/tags';
+import { clearancePermission, mayExtend } from '@/shared/rules/permissions';
+import { expiryProblem } from '@/shared/rules/tags';
 import type { ClearInAbsenceInput, ClearTagInput, ExtendTagInput, ProofInput } from '@/shared/schemas/tags';
 import type { Tag as TagDto } from '@/shared/types/tags';
 
@@ -113,7 +114,7 @@ export async function extendTag(sequelize: Sequelize, actor: AuthUser, id: numbe
 /** Anyone who can see the tag except a viewer may add a note while it is live. */
 export async function addTagNote(sequelize: Sequelize, actor: AuthUser, id: number, text: string, idem: Idempotency | null = null): Promise<TagDto> {
   return actOnTag(sequelize, actor, id, idem, async (tag, transaction) => {
-    if (actor.role === 'viewer') throw forbidden('Viewers cannot add notes.');
+    ensurePermission(actor, 'annotateTag', 'Viewers cannot add notes.');
     await appendEvent(tag, 'note-added', actor, { text }, transaction, idem);
   });
 }
@@ -132,7 +133,7 @@ export async function proveTag(sequelize: Sequelize, actor: AuthUser, id: number
 
 /** Adds a photo of the lock or tag in place to a live tag, and records it in the tag's history. */
 export async function addTagPhoto(sequelize: Sequelize, storage: PhotoStorage, actor: AuthUser, id: number, file: Buffer, caption: string | null, idem: Idempotency | null = null): Promise<TagDto> {
-  if (actor.role === 'viewer') throw new HttpError(403, 'forbidden', 'Viewers cannot add photos.');
+  ensurePermission(actor, 'annotateTag', 'Viewers cannot add photos.');
   await once(actor, idem, async () => {
     const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId } }) : null;
     if (!tag) throw notFound('Tag');

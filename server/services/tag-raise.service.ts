@@ -2,7 +2,7 @@
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import { clock } from '@/server/lib/clock';
 import { HttpError, notFound, unprocessable } from '@/server/lib/http-error';
-import type { AuthUser } from '@/server/middleware/auth';
+import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
 import { Asset } from '@/server/models/asset.model';
 import { Tag } from '@/server/models/tag.model';
 import { TagPoint } from '@/server/models/tag-point.model';
@@ -14,7 +14,7 @@ import { requireNoPendingNotices } from '@/server/services/tag-notices.service';
 import { getTag } from '@/server/services/tags.service';
 import { ENERGY_SOURCE_LABELS } from '@/shared/rules/register';
 import { sourcesNotAccounted } from '@/shared/rules/tag-isolation';
-import { expiryProblem, mayRaise } from '@/shared/rules/tags';
+import { expiryProblem } from '@/shared/rules/tags';
 import type { RaiseTagInput } from '@/shared/schemas/tags';
 import type { Tag as TagDto } from '@/shared/types/tags';
 
@@ -30,7 +30,7 @@ async function findAsset(actor: AuthUser, assetId: number, transaction?: Transac
  * is refused (422).
  */
 export async function raiseTag(sequelize: Sequelize, actor: AuthUser, assetId: number, input: RaiseTagInput, idem: Idempotency | null): Promise<{ tag: TagDto; created: boolean }> {
-  if (!mayRaise(actor)) throw new HttpError(403, 'forbidden', 'Viewers cannot raise tags.');
+  ensurePermission(actor, 'raiseTag', 'Viewers cannot raise tags.');
   const { tagId, replayed } = await once(actor, idem, async () => {
     await requireNoPendingNotices(actor);
     const asset = await findAsset(actor, assetId);

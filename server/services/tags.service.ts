@@ -12,6 +12,7 @@ import { seesSite, siteWhere } from '@/server/services/site-access.service';
 import { loadEvents } from '@/server/services/tag-history.service';
 import { tagInclude, toTagDto } from '@/server/services/tags.dto';
 import type { Paging } from '@/shared/rules/paging';
+import { rolesWith } from '@/shared/rules/permissions';
 import type { ListResponse } from '@/shared/types/api';
 import type { Tag as TagDto } from '@/shared/types/tags';
 
@@ -45,10 +46,10 @@ export async function listTags(actor: AuthUser, filters: TagFilters, paging: Pag
   return { items: rows.map((t) => ({ ...toTagDto(t), photoCount: photos.get(t.id)?.length ?? 0 })), total: count, page: paging.page, pageSize: paging.pageSize };
 }
 
-/** People a tag can be offered or reassigned to: active, signed-up, non-viewer members of the caller's organisation. */
+/** People a tag can be offered or reassigned to: active, signed-up members who may hold tags, of the caller's organisation. */
 export async function listTagColleagues(actor: AuthUser): Promise<{ id: number; name: string; role: string }[]> {
   const users = await User.findAll({
-    where: { organisationId: actor.organisationId, active: true, role: { [Op.ne]: 'viewer' }, passwordHash: { [Op.ne]: null } },
+    where: { organisationId: actor.organisationId, active: true, role: rolesWith('holdTags'), passwordHash: { [Op.ne]: null } },
     attributes: ['id', 'name', 'role'],
     order: [['name', 'ASC']],
   });

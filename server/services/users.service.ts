@@ -10,7 +10,7 @@ import { recordAudit } from '@/server/services/audit.service';
 import { issuePasswordLink, withdrawPasswordLinks } from '@/server/services/auth.service';
 import { siteIdsByUser } from '@/server/services/site-access.service';
 import type { Paging } from '@/shared/rules/paging';
-import { may } from '@/shared/rules/permissions';
+import { may, rolesWith } from '@/shared/rules/permissions';
 import type { ChangeUserInput, InviteUserInput, SiteAccessInput } from '@/shared/schemas/team';
 import type { ListResponse } from '@/shared/types/api';
 import type { TeamMember } from '@/shared/types/team';
@@ -96,8 +96,9 @@ export async function changeUser(sequelize: Sequelize, actor: AuthUser, id: numb
     if (user.id === actor.id && (newRole !== user.role || !newActive)) {
       throw new HttpError(409, 'self', 'You cannot change your own role or deactivate yourself. Ask another admin.');
     }
-    if (user.role === 'admin' && user.active && (newRole !== 'admin' || !newActive)) {
-      const admins = await User.count({ where: { organisationId: actor.organisationId, role: 'admin', active: true, id: { [Op.ne]: user.id } }, transaction });
+    // The last active person who may administer the team keeps that role and stays active.
+    if (may(user, 'administerTeam') && user.active && (!may({ role: newRole }, 'administerTeam') || !newActive)) {
+      const admins = await User.count({ where: { organisationId: actor.organisationId, role: rolesWith('administerTeam'), active: true, id: { [Op.ne]: user.id } }, transaction });
       if (admins === 0) throw new HttpError(409, 'last-admin', 'The organisation needs at least one active admin.');
     }
     const audit = (type: 'role-change' | 'user-deactivated' | 'user-reactivated', detail: Record<string, unknown>) =>
