@@ -74,6 +74,7 @@ export const ICON_GLYPHS = {
   'home-variant-outline': 0xf0ba7,
   'image-broken-variant': 0xf02ee,
   'image-off-outline': 0xf11d1,
+  'import': 0xf02fa,
   'information': 0xf02fc,
   'information-outline': 0xf02fd,
   'key-outline': 0xf0dd6,
