@@ -16,6 +16,7 @@
  */
 const path = require('node:path');
 const chunkFilenames = require('@expo/metro-config/build/serializer/computeChunkFilenames');
+const serializeChunks = require('@expo/metro-config/build/serializer/serializeChunks');
 
 const LAYOUT = /^app\/(?:.+\/)?_layout\.[cm]?[jt]sx?$/;
 let installed = false;
@@ -46,27 +47,57 @@ function refillChunksByPath(chunks, chunksByPath) {
   for (const chunk of chunks) if (chunk.sealed) for (const module of chunk.deps) put(module.path, chunk);
 }
 
-/** Keeps in `__common` only what the layouts need; returns how many modules went back to the routes. */
+/** The module an async dependency (import(), a lazy route) loads, unless it is a worker's. */
+function asyncTargets(graph, modules) {
+  const targets = new Set();
+  for (const module of modules) {
+    for (const dependency of module.dependencies.values()) {
+      const type = dependency.data.data.asyncType;
+      if (!type || type === 'worker' || !dependency.absolutePath) continue;
+      const target = graph.dependencies.get(dependency.absolutePath);
+      if (target) targets.add(target);
+    }
+  }
+  return targets;
+}
+
+/**
+ * Keeps in `__common` only what the layouts need. Every other async script then holds all it imports statically
+ * except what the entry script and that common part already define. An import() whose script Expo dropped
+ * (all its modules had gone to `__common`) gets a script of its own again, so it stays lazy.
+ */
 function keepCommonForLayouts(chunks, chunksByPath) {
   const all = [...chunks];
   const common = all.find((chunk) => chunk.isVendor && !chunk.isAsync && chunk.name === '/__common.js');
-  if (!common || common.options.dev) return 0;
+  const entry = all.find((chunk) => chunk.isEntry && !chunk.isAsync && !chunk.sealed);
+  if (!common || !entry || common.options.dev) return;
   const { graph, options } = common;
-  const asyncChunks = all.filter((chunk) => chunk.isAsync && !chunk.sealed && chunk !== common);
-  const layoutRoots = asyncChunks.flatMap((chunk) => [...chunk.entries].filter((m) => LAYOUT.test(path.relative(options.projectRoot, m.path).split(path.sep).join('/'))));
-  const shell = staticClosure(graph, layoutRoots);
-  const moved = new Set();
-  for (const chunk of asyncChunks) {
-    for (const module of staticClosure(graph, chunk.entries)) {
-      if (common.deps.has(module) && !shell.has(module)) {
-        chunk.deps.add(module);
-        moved.add(module);
+  const isLayout = (m) => LAYOUT.test(path.relative(options.projectRoot, m.path).split(path.sep).join('/'));
+  const asyncChunks = () => [...chunks].filter((chunk) => chunk.isAsync && !chunk.sealed);
+  const shell = staticClosure(graph, asyncChunks().flatMap((chunk) => [...chunk.entries].filter(isLayout)));
+  const keep = new Set([...common.deps].filter((m) => shell.has(m)));
+  const eager = (m) => entry.deps.has(m) || keep.has(m);
+  const hasOwnChunk = (m) => [...chunks].some((chunk) => chunk.entries.has(m));
+  const { Chunk } = serializeChunks;
+  const required = asyncChunks()[0]?.requiredChunks ?? new Set();
+  for (let todo = asyncChunks(); todo.length; ) {
+    const created = [];
+    for (const chunk of todo) {
+      const closure = staticClosure(graph, chunk.entries);
+      for (const module of closure) if (!eager(module)) chunk.deps.add(module);
+      for (const target of asyncTargets(graph, closure)) {
+        if (eager(target) || hasOwnChunk(target)) continue;
+        const lazy = new Chunk(target.path, new Set([target]), graph, options, true);
+        lazy.requiredChunks = new Set(required);
+        chunks.add(lazy);
+        created.push(lazy);
       }
     }
+    todo = created;
   }
-  for (const module of moved) common.deps.delete(module);
+  for (const module of [...common.deps]) if (!keep.has(module)) common.deps.delete(module);
+  for (const chunk of asyncChunks()) if (chunk.deps.size === 0) chunks.delete(chunk);
   refillChunksByPath(chunks, chunksByPath);
-  return moved.size;
 }
 
 function install() {
