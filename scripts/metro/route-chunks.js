@@ -77,7 +77,7 @@ function keepCommonForLayouts(chunks, chunksByPath) {
   const shell = staticClosure(graph, asyncChunks().flatMap((chunk) => [...chunk.entries].filter(isLayout)));
   const keep = new Set([...common.deps].filter((m) => shell.has(m)));
   const eager = (m) => entry.deps.has(m) || keep.has(m);
-  const hasOwnChunk = (m) => [...chunks].some((chunk) => chunk.entries.has(m));
+  const hasOwnChunk = (m) => [...chunks].some((chunk) => chunk.isAsync && chunk.entries.has(m));
   const { Chunk } = serializeChunks;
   const required = asyncChunks()[0]?.requiredChunks ?? new Set();
   for (let todo = asyncChunks(); todo.length; ) {
@@ -96,6 +96,8 @@ function keepCommonForLayouts(chunks, chunksByPath) {
     todo = created;
   }
   for (const module of [...common.deps]) if (!keep.has(module)) common.deps.delete(module);
+  // Expo names every shared module an entry of `__common`; those left it, and import() must not look for them there.
+  common.entries = new Set(keep);
   for (const chunk of asyncChunks()) if (chunk.deps.size === 0) chunks.delete(chunk);
   refillChunksByPath(chunks, chunksByPath);
 }
