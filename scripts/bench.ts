@@ -6,6 +6,7 @@
  * Needs a built web app (npm run build:web). BENCH_LIVE, BENCH_CLEARED, BENCH_REQUESTS change the sizes;
  * BENCH_ONLY=pages measures only the JavaScript and the scan (no tags seeded, no database timings).
  */
+import '@/scripts/lib/bench-env';
 import fs from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import os from 'node:os';
@@ -30,6 +31,7 @@ const LIVE = Number(process.env.BENCH_LIVE ?? 5000);
 const CLEARED = Number(process.env.BENCH_CLEARED ?? 100_000);
 const REQUESTS = Number(process.env.BENCH_REQUESTS ?? 100);
 const ONLY_PAGES = process.env.BENCH_ONLY === 'pages';
+const ONLY_DB = process.env.BENCH_ONLY === 'db';
 const DIST = path.resolve(__dirname, '../dist');
 const say = (line: string) => console.log(`[bench] ${line}`);
 const ms = (n: number) => `${n.toFixed(1)} ms`;
@@ -37,7 +39,7 @@ const kb = (n: number) => `${(n / 1024).toFixed(0)} KB`;
 const verdict = (ok: boolean) => (ok ? 'meets target' : 'MISSES target');
 
 async function main() {
-  if (!fs.existsSync(path.join(DIST, 'index.html'))) throw new Error('dist/index.html is missing: npm run build:web first');
+  if (!ONLY_DB && !fs.existsSync(path.join(DIST, 'index.html'))) throw new Error('dist/index.html is missing: npm run build:web first');
   const tmp = fs.mkdtempSync(path.join(os.tmpdir(), 'isoledger-bench-'));
   const db = await startPrivateMariaDb({ dataDir: path.join(tmp, 'db'), port: await freePort() });
   // The server's own restricted account, as npm start uses it; the raw queries go through the same account.
@@ -66,6 +68,7 @@ async function main() {
     const actor = { id: supervisor.id, organisationId: supervisor.organisationId, role: supervisor.role, name: supervisor.name, email: supervisor.email };
     const items = await Asset.findAll({ where: { organisationId: supervisor.organisationId }, limit: 50 });
     if (!ONLY_PAGES) await databaseFigures();
+    if (ONLY_DB) return;
     async function databaseFigures() {
     const statements = await captureBoardSql(sequelize, actor);
     const board = await timeIt(REQUESTS, () => get('/board'));
