@@ -22,7 +22,7 @@ import { DEMO_PASSWORD, seedDemo } from '@/server/seed/demo';
 import { labelUrl } from '@/shared/rules/label-code';
 import { captureBoardSql, getter, rawBoard, timeIt } from '@/scripts/lib/bench-db';
 import { buildBlankApp, launchChromium, scriptsBeforeFirstRender, serveDist, type ScriptBytes } from '@/scripts/lib/bench-js';
-import { seedBenchTags } from '@/scripts/lib/bench-tags';
+import { seedBenchRegister, seedBenchTags } from '@/scripts/lib/bench-tags';
 import { localAccounts, provisionDatabase } from '@/scripts/lib/local-db';
 import { freePort, startPrivateMariaDb } from '@/scripts/lib/mariadb';
 import { writeY4mFromPng } from '@/test/e2e/support/y4m';
@@ -52,8 +52,10 @@ async function main() {
     await seedDemo(sequelize, { storage: createPhotoStorage(config) });
     const supervisor = (await User.findOne({ where: { email: 'supervisor@example.test' } }))!;
     if (!ONLY_PAGES) {
-      say(`seeding ${LIVE} live and ${CLEARED} cleared tags…`);
-      await seedBenchTags(supervisor.organisationId, LIVE, CLEARED);
+      say(`seeding a register and ${LIVE} live and ${CLEARED} cleared tags…`);
+      const register = await seedBenchRegister(supervisor.organisationId, supervisor.id);
+      const seeded = await seedBenchTags(sequelize, supervisor.organisationId, LIVE, CLEARED);
+      say(`seeded ${seeded.sites} sites, ${register.rooms} bench plant rooms, ${seeded.items} items; ${seeded.points} isolation points, ${seeded.proofs} proofs, ${seeded.events} tag events`);
     }
 
     const server = createApp({ sequelize, config }).listen(0, '127.0.0.1');

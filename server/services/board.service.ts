@@ -163,12 +163,16 @@ async function siteCounts(sequelize: Sequelize, scope: Scope, f: Partial<BoardFi
   const overdue = boardStateSql('overdue', 't.expires_at', scope.now);
   const dueSoon = boardStateSql('due-soon', 't.expires_at', scope.now);
   const rows = await sequelize.query<{ siteId: number; siteName: string; total: number; overdue: number; dueSoon: number; notProved: number; matching: number }>(
-    `SELECT STRAIGHT_JOIN a.site_id AS siteId, s.name AS siteName, COUNT(*) AS total,
-       SUM(${overdue.sql}) AS overdue, SUM(${dueSoon.sql}) AS dueSoon,
-       SUM(t.kind = 'isolation' AND NOT ${PROVED}) AS notProved, ${matched.sql} AS matching
-     FROM tags t
-     ${joinsFor('s.', matched.sql)}
-     WHERE ${w.sql} GROUP BY a.site_id, s.name ORDER BY s.name, a.site_id`,
+    // Grouped by the item's site first; each site's name is joined once per site, not once per tag.
+    `SELECT c.siteId, s.name AS siteName, c.total, c.overdue, c.dueSoon, c.notProved, c.matching
+     FROM (SELECT STRAIGHT_JOIN a.site_id AS siteId, COUNT(*) AS total,
+         SUM(${overdue.sql}) AS overdue, SUM(${dueSoon.sql}) AS dueSoon,
+         SUM(t.kind = 'isolation' AND NOT ${PROVED}) AS notProved, ${matched.sql} AS matching
+       FROM tags t
+       ${joinsFor('a.', matched.sql)}
+       WHERE ${w.sql} GROUP BY a.site_id) c
+     JOIN sites s ON s.id = c.siteId
+     ORDER BY s.name, c.siteId`,
     { replacements: [...overdue.values, ...dueSoon.values, ...matched.values, ...w.values], type: QueryTypes.SELECT },
   );
   return {
