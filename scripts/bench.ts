@@ -1,8 +1,9 @@
 /*
  * npm run bench — the speed and size figures, each printed with its ratio or target:
  *   board at 5,000 live + 100,000 cleared tags (HTTP) against the same SQL sent raw through the mariadb driver, the two
- *   taking turns; label lookup and item record over a register of several sites, plant rooms and items; JavaScript before first render (sign-in, a label's page) against a near-blank Expo Router app
- *   built in the same run; scan-to-record in Chromium with a fake camera.
+ *   taking turns; label lookup and item record over a register of several sites, plant rooms and items; JavaScript
+ *   before first render (sign-in, a label's page) against a near-blank Expo Router app built in the same run;
+ *   scan-to-record in Chromium with a fake camera.
  * Needs a built web app (npm run build:web). BENCH_LIVE, BENCH_CLEARED, BENCH_REQUESTS change the sizes;
  * BENCH_ONLY=pages measures only the JavaScript and the scan (no tags seeded, no database timings); BENCH_ONLY=db only
  * the database figures (no web build needed).
