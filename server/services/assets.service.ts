@@ -70,25 +70,36 @@ async function findAsset(actor: AuthUser, id: number, transaction?: Transaction)
   return asset;
 }
 
+/** How many photos each live tag of an item has, counted in the database (the record shows counts, not photos). */
+async function liveTagPhotoCounts(organisationId: number, assetId: number): Promise<Map<number, number>> {
+  const rows = await Asset.sequelize!.query<{ tagId: number; photos: number | bigint }>(
+    `SELECT p.tag_id AS tagId, COUNT(*) AS photos FROM tags t JOIN photos p ON p.tag_id = t.id
+     WHERE t.organisation_id = ? AND t.asset_id = ? AND t.status = 'live' GROUP BY p.tag_id`,
+    { replacements: [organisationId, assetId], type: QueryTypes.SELECT },
+  );
+  return new Map(rows.map((r) => [Number(r.tagId), Number(r.photos)]));
+}
+
 /**
- * The item's record, read once each and side by side: the item (scoped like every read), its photos, its live tags
- * (which also give the item's state) and where it is itself an isolation point; then the live tags' photo counts.
+ * The item's record in one round of reads side by side, each read once: the item (scoped like every read), its
+ * photos, its live tags (which also give the item's state), their photo counts and where the item is itself an
+ * isolation point.
  */
 export async function getAsset(actor: AuthUser, id: number): Promise<AssetDto> {
-  const [asset, photos, live, uses] = await Promise.all([
+  const [asset, photos, live, tagPhotos, uses] = await Promise.all([
     Asset.findOne({ where: { id, organisationId: actor.organisationId, ...siteWhere(actor) }, include }),
     photosOf('assetId', [id]),
     Tag.findAll({ where: { organisationId: actor.organisationId, assetId: id, status: 'live' }, include: tagInclude, order: [['raisedAt', 'DESC'], ['id', 'DESC']] }),
+    liveTagPhotoCounts(actor.organisationId, id),
     pointUses(actor.organisationId, id),
   ]);
   if (!asset) throw notFound('Plant item');
-  const tagPhotos = await photosOf('tagId', live.map((t) => t.id));
   const states = live.map((t) => ({ kind: t.kind, status: t.status, expiresAt: t.expiresAt, proved: provedOf(t) ?? true }));
   const assetPhotos = photos.get(id) ?? [];
   return {
     ...toAssetDto(asset, { photos: assetPhotos, thumbnailPhotoId: assetPhotos[0]?.id ?? null }),
     ...assetStateFromTags(states, clock.now()),
-    liveTags: live.slice(0, RECORD_LIVE_TAGS).map((t) => ({ ...toTagDto(t), photoCount: tagPhotos.get(t.id)?.length ?? 0 })),
+    liveTags: live.slice(0, RECORD_LIVE_TAGS).map((t) => ({ ...toTagDto(t), photoCount: tagPhotos.get(t.id) ?? 0 })),
     pointUses: uses,
   };
 }

@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { clock } from '@/server/lib/clock';
+import { Photo } from '@/server/models/photo.model';
 import { TagPoint } from '@/server/models/tag-point.model';
 import { TagProof } from '@/server/models/tag-proof.model';
 import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp } from '@/test/setup/app';
@@ -25,11 +26,21 @@ beforeAll(async () => {
   const tag = (assetId: number, expiresInHours: number, extra: Partial<Parameters<typeof insertTag>[0]> = {}) =>
     insertTag({ organisationId, assetId, holderId: u.engineer.id, now: NOW, expiresInHours, ...extra });
   // The pump's history: three cleared tags, then an overdue isolation, a proved isolation and an override, all live.
-  for (const hours of [-500, -300, -100]) await tag(plant.pump.id, hours, { status: 'cleared', raisedHoursAgo: -hours + 10 });
+  const cleared = [];
+  for (const hours of [-500, -300, -100]) cleared.push(await tag(plant.pump.id, hours, { status: 'cleared', raisedHoursAgo: -hours + 10 }));
   ids.overdue = (await tag(plant.pump.id, -1, { reason: 'Seal leaking at the gland', raisedHoursAgo: 20 })).id;
   ids.proved = (await tag(plant.pump.id, 30, { reason: 'Coupling change', raisedHoursAgo: 3 })).id;
   ids.override = (await tag(plant.pump.id, 6, { kind: 'override', reason: 'Run-on timer bypassed', raisedHoursAgo: 1 })).id;
   await TagProof.create({ tagId: ids.proved, organisationId, method: 'try-start', instrument: '', reading: 'No start', note: '', byId: u.engineer.id, at: NOW });
+  // Photos of the locks in place: two on the proved isolation, one on a cleared tag, one of the pump itself.
+  const photo = (owner: { tagId?: number; assetId?: number }, n: number) => Photo.create({
+    organisationId, assetId: owner.assetId ?? null, plantRoomId: null, tagId: owner.tagId ?? null, storageKey: `k${n}`, thumbnailKey: `t${n}`,
+    width: 640, height: 480, bytes: 1000, caption: null, createdBy: u.engineer.id,
+  });
+  await photo({ tagId: ids.proved }, 1);
+  await photo({ tagId: ids.proved }, 2);
+  await photo({ tagId: cleared[0].id }, 3);
+  ids.pumpPhoto = (await photo({ assetId: plant.pump.id }, 4)).id;
   // The pump's local isolator is locked off for work on the boiler.
   ids.boiler = (await tag(plant.boiler.id, 12, { reason: 'Burner strip-down' })).id;
   await TagPoint.create({ tagId: ids.boiler, assetId: plant.isolator.id, description: 'Local isolator', method: 'isolator-locked', lockNumber: 'PL-7' });
@@ -65,9 +76,10 @@ describe('GET /api/labels/:code answers the record', () => {
     expect(body).toMatchObject({ id: plant.pump.id, state: 'isolated', liveIsolations: 2, liveOverrides: 1, unprovedIsolations: 1, overdue: true, pointUses: [] });
     const live = body.liveTags as { id: number; proved: boolean | null; overdue: boolean; photoCount: number }[];
     expect(live.map((x) => x.id)).toEqual([ids.override, ids.proved, ids.overdue]);
-    expect(live.map((x) => [x.proved, x.overdue])).toEqual([[null, false], [true, false], [false, true]]);
+    expect(live.map((x) => [x.proved, x.overdue, x.photoCount])).toEqual([[null, false, 0], [true, false, 2], [false, true, 0]]);
+    expect(body).toMatchObject({ thumbnailUrl: `/api/photos/${ids.pumpPhoto}/thumbnail`, photos: [{ id: ids.pumpPhoto }] });
     // The item's tags are read in one statement (state and list alike); the rest are the session, the label, the
-    // item, its photos, the point uses and the live tags' photos.
+    // item, its photos, the live tags' photo counts and the point uses.
     expect(statements.filter((s) => /FROM `tags` AS `Tag`/.test(s))).toHaveLength(1);
     expect(statements.length).toBeLessThanOrEqual(7);
   });
