@@ -1,5 +1,6 @@
 import { MaterialCommunityIcons } from '@expo/vector-icons';
 import { Link } from 'expo-router';
+import { useMemo } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, layout, radius, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
@@ -7,6 +8,7 @@ import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { useSiteQuery } from '@/hooks/api/use-sites';
+import { useTagsQuery } from '@/hooks/api/use-tags';
 import { flushOutbox, outbox } from '@/hooks/offline/send-or-queue';
 import { useOutboxEntries } from '@/hooks/offline/use-outbox';
 import type { OutboxEntry } from '@/hooks/offline/outbox-types';
@@ -31,20 +33,29 @@ function PendingEntry({ entry, actions }: { entry: OutboxEntry; actions: boolean
       </View>
     );
   }
+  const clearance = entry.kind === 'tag-clear';
+  const title = `${clearance ? 'Clearance waiting to send' : 'Waiting to send'}: ${entry.summary}`;
   return (
-    <View testID="pending-entry" style={styles.waiting} accessibilityLabel={`Waiting to send: ${entry.summary}`}>
+    <View testID="pending-entry" style={styles.waiting} accessibilityLabel={title}>
       <MaterialCommunityIcons name="cloud-upload-outline" size={26} color={colors.mandatory} />
       <View style={{ flex: 1 }}>
-        <Text bold>{`Waiting to send: ${entry.summary}`}</Text>
-        <Text muted variant="small">{`Taken ${when(entry.createdAt)} on this device. Not on record until the server confirms it.`}</Text>
+        <Text bold>{title}</Text>
+        <Text muted variant="small">
+          {clearance
+            ? `Taken ${when(entry.createdAt)} on this device. The tag stays live on record until the server confirms the clearance.`
+            : `Taken ${when(entry.createdAt)} on this device. Not on record until the server confirms it.`}
+        </Text>
       </View>
     </View>
   );
 }
 
-/** The actions of one item or tag still on this device; nothing when there are none. */
-export function PendingForRecord({ assetId, tagId }: { assetId?: number; tagId?: number }) {
-  const entries = useOutboxEntries({ assetId, tagId });
+/** The actions of one item (and of its tags) or of one tag still on this device; nothing when there are none. */
+export function PendingForRecord({ assetId, tagId, tagIds }: { assetId?: number; tagId?: number; tagIds?: readonly number[] }) {
+  const all = useOutboxEntries();
+  const entries = all.filter((e) =>
+    (assetId !== undefined && (e.assetId === assetId || (e.tagId !== undefined && !!tagIds?.includes(e.tagId)))) ||
+    (tagId !== undefined && e.tagId === tagId));
   if (!entries.length) return null;
   return (
     <Card>
@@ -61,7 +72,10 @@ export function PendingForRecord({ assetId, tagId }: { assetId?: number; tagId?:
  */
 export function ItemOffline({ asset }: { asset: Pick<Asset, 'id' | 'siteId'> }) {
   useSiteQuery(asset.siteId);
-  return <PendingForRecord assetId={asset.id} />;
+  // The item's tags as its record shows them (the same cached list): a note or clearance queued on one belongs here too.
+  const tags = useTagsQuery({ assetId: asset.id });
+  const tagIds = useMemo(() => (tags.data?.items ?? []).map((t) => t.id), [tags.data]);
+  return <PendingForRecord assetId={asset.id} tagIds={tagIds} />;
 }
 
 /** A strip at the top of every signed-in screen while anything waits or was refused. */

@@ -8,13 +8,13 @@ import type { OutboxEntry } from '@/hooks/offline/outbox-types';
 const RETRY_EVERY_MS = 15_000;
 
 /** Every entry on this device, oldest first; re-renders when one is added, sent or refused. */
-export function useOutboxEntries(filter?: { assetId?: number; tagId?: number }): OutboxEntry[] {
+export function useOutboxEntries(): OutboxEntry[] {
   const all = useSyncExternalStore(outbox.subscribe, outbox.snapshot, outbox.snapshot);
   const { token } = useAuth();
   useEffect(() => { void outbox.load(); }, []);
   // Only the signed-in person's actions: a shared device never shows one person's entries to the next.
   const owner = tokenOwner(token);
-  return all.filter((e) => e.owner === owner && (filter?.assetId === undefined || e.assetId === filter.assetId) && (filter?.tagId === undefined || e.tagId === filter.tagId));
+  return all.filter((e) => e.owner === owner);
 }
 
 /**
