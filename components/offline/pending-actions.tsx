@@ -1,6 +1,7 @@
 import { MaterialCommunityIcons } from '@expo/vector-icons';
 import { Link } from 'expo-router';
-import { useMemo } from 'react';
+import { onlineManager } from '@tanstack/react-query';
+import { useMemo, useSyncExternalStore } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, layout, radius, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
@@ -78,20 +79,30 @@ export function ItemOffline({ asset }: { asset: Pick<Asset, 'id' | 'siteId'> }) 
   return <PendingForRecord assetId={asset.id} tagIds={tagIds} />;
 }
 
-/** A strip at the top of every signed-in screen while anything waits or was refused. */
+/** A strip at the top of every signed-in screen with no signal, and while anything waits or was refused. */
 export function PendingBanner() {
   const entries = useOutboxEntries();
-  if (!entries.length) return null;
+  const online = useSyncExternalStore(onlineManager.subscribe, () => onlineManager.isOnline(), () => true);
+  const noSignal = online ? null : (
+    <View style={styles.noSignal} testID="no-signal-banner" accessibilityRole="alert">
+      <MaterialCommunityIcons name="cloud-off-outline" size={24} color={colors.ink} />
+      <Text bold style={{ flex: 1 }}>No signal: showing what this device saved. Records not opened here before cannot load.</Text>
+    </View>
+  );
+  if (!entries.length) return noSignal;
   const refused = entries.filter((e) => e.state === 'refused').length;
   const waiting = entries.length - refused;
   const words = [waiting ? `${waiting} waiting to send` : '', refused ? `${refused} refused` : ''].filter(Boolean).join(', ');
   return (
-    <Link href="/pending" asChild>
-      <Pressable style={StyleSheet.flatten([styles.banner, refused ? styles.bannerRefused : null])} accessibilityRole="link" testID="pending-banner">
-        <MaterialCommunityIcons name={refused ? 'alert-octagon' : 'cloud-upload-outline'} size={24} color={colors.ink} />
-        <Text bold>{`Actions on this device: ${words}`}</Text>
-      </Pressable>
-    </Link>
+    <>
+      {noSignal}
+      <Link href="/pending" asChild>
+        <Pressable style={StyleSheet.flatten([styles.banner, refused ? styles.bannerRefused : null])} accessibilityRole="link" testID="pending-banner">
+          <MaterialCommunityIcons name={refused ? 'alert-octagon' : 'cloud-upload-outline'} size={24} color={colors.ink} />
+          <Text bold>{`Actions on this device: ${words}`}</Text>
+        </Pressable>
+      </Link>
+    </>
   );
 }
 
@@ -115,4 +126,5 @@ const styles = StyleSheet.create({
   link: { minHeight: layout.minTouch, paddingVertical: space.md },
   banner: { flexDirection: 'row', gap: space.sm, alignItems: 'center', minHeight: layout.minTouch, paddingHorizontal: space.lg, backgroundColor: colors.mandatorySoft, borderBottomWidth: 2, borderBottomColor: colors.mandatory },
   bannerRefused: { backgroundColor: colors.dangerSoft, borderBottomColor: colors.danger },
+  noSignal: { flexDirection: 'row', gap: space.sm, alignItems: 'center', minHeight: layout.minTouch, paddingHorizontal: space.lg, paddingVertical: space.xs, backgroundColor: colors.surfaceSunk, borderBottomWidth: 2, borderBottomColor: colors.line },
 });

@@ -1,11 +1,8 @@
-import { onlineManager, type QueryClient } from '@tanstack/react-query';
+import type { QueryClient } from '@tanstack/react-query';
+import { RequestError } from '@/hooks/api/request';
+import { knownOffline } from '@/hooks/offline/connectivity';
 import type { Asset } from '@/shared/types/register';
 import type { ListResponse } from '@/shared/types/user';
-
-/** True when the device knows it has no connection (the browser says so, or react-query was told). */
-export function knownOffline(): boolean {
-  return !onlineManager.isOnline() || (typeof navigator !== 'undefined' && navigator.onLine === false);
-}
 
 type Cached = Asset | ListResponse<Asset> | undefined;
 
@@ -41,10 +38,17 @@ export const cachedAssetByLabel = (qc: QueryClient, code: string) => newest(qc, 
 
 /**
  * With no signal, an item never opened on its own still opens from the row its plant room's list (or a search)
- * left in the cache; with a signal the record is fetched as usual.
+ * left in the cache: as the query's first data when the device already knows there is no signal, and in place of
+ * the record when the request finds none.
  */
 export function offlineAssetCopy(qc: QueryClient, id: number): { data: Asset; updatedAt: number } | undefined {
   if (!knownOffline()) return undefined;
   const found = newest(qc, (a) => a.id === id);
   return found ? { data: found.asset, updatedAt: found.updatedAt } : undefined;
+}
+
+export function assetCopyOr(qc: QueryClient, id: number, err: unknown): Asset {
+  const copy = err instanceof RequestError && err.status === 0 ? newest(qc, (a) => a.id === id) : undefined;
+  if (!copy) throw err;
+  return copy.asset;
 }

@@ -1,5 +1,5 @@
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it, onTestFailed } from 'vitest';
 import { PHONE, launch, openPage, screenshot, signIn, type Session } from '@/test/e2e/support/browser';
 import { api, apiToken } from '@/test/e2e/support/api';
 import type { Asset } from '@/shared/types/register';
@@ -76,6 +76,7 @@ describe('in a plant room with no signal, on a phone', () => {
     const earlier = await raiseOverride(item.id, 'Pump held on hand for the commissioning engineer');
     const readingsBefore = (await readingsOn(item.id)).length;
     const { page, context, errors, offsite } = await openPage(session.browser, PHONE);
+    onTestFailed(async () => { await screenshot(page, `debug-${Date.now()}`); console.log('DEBUG', page.url(), errors); });
     await signIn(page, baseUrl, 'engineer2@example.test');
     await page.getByTestId('home-engineer').waitFor();
     // The tag raised earlier is opened with a signal too, so a note can be added to it below ground.
@@ -198,6 +199,7 @@ describe('in a plant room with no signal, on a phone', () => {
     const tag = await raiseOverride(item.id, 'Pump left running on hand for the flushing contractor');
 
     const { page, context, errors, offsite } = await openPage(session.browser, PHONE);
+    onTestFailed(async () => { await screenshot(page, `debug-${Date.now()}`); console.log('DEBUG', page.url(), errors); });
     await signIn(page, baseUrl, 'engineer2@example.test');
     await page.getByTestId('home-engineer').waitFor();
     // With a signal: the plant room (its list of items) and the tag. The other item's own record is never opened.
