@@ -86,7 +86,7 @@ export function PendingBanner() {
   const noSignal = online ? null : (
     <View style={styles.noSignal} testID="no-signal-banner" accessibilityRole="alert">
       <MaterialCommunityIcons name="cloud-off-outline" size={24} color={colors.ink} />
-      <Text bold style={{ flex: 1 }}>No signal: showing what this device saved. Records not opened here before cannot load.</Text>
+      <Text bold style={{ flex: 1 }}>No signal: showing what this device saved.</Text>
     </View>
   );
   if (!entries.length) return noSignal;
@@ -115,7 +115,7 @@ export function PendingActionsList() {
   return (
     <View style={{ gap: space.md }} testID="pending-list">
       {entries.map((e) => <PendingEntry key={e.key} entry={e} actions />)}
-      <Button title="Send now" onPress={() => void flushOutbox()} testID="pending-send-now" />
+      {entries.some((e) => e.state === 'waiting') ? <Button title="Send now" onPress={() => void flushOutbox()} testID="pending-send-now" /> : null}
     </View>
   );
 }
