@@ -9,8 +9,8 @@ import { Photo } from '@/server/models/photo.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { Tag } from '@/server/models/tag.model';
 import { User } from '@/server/models/user.model';
-import { toPhotoDto } from '@/server/services/register-dto';
-import { findPlantRoom } from '@/server/services/register-access';
+import { toPhotoDto } from '@/server/services/register.dto';
+import { findPlantRoom } from '@/server/services/register.lookup';
 import type { Photo as PhotoDto } from '@/shared/types/register';
 import { seesSite, siteWhere, visibleSiteIds } from '@/server/services/site-access.service';
 

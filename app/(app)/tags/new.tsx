@@ -12,7 +12,8 @@ import { useMeQuery } from '@/hooks/api/use-auth';
 import { useIsolationPlanQuery } from '@/hooks/api/use-connections';
 import { useSiteQuery } from '@/hooks/api/use-sites';
 import { ENERGY_SOURCES, type EnergySource } from '@/shared/rules/register';
-import { mayRaise, type TagKind } from '@/shared/rules/tags';
+import { may } from '@/shared/rules/permissions';
+import type { TagKind } from '@/shared/rules/tags';
 
 export default function RaiseTagScreen() {
   const params = useLocalSearchParams<{ assetId?: string; kind?: string; planSources?: string }>();
@@ -39,7 +40,7 @@ export default function RaiseTagScreen() {
       {(item) => {
         const title = 'Raise a tag';
         const subtitle = `${item.plantId} · ${item.name} · ${item.siteName}`;
-        if (!me || !mayRaise(me)) {
+        if (!me || !may(me, 'raiseTag')) {
           return <Screen title={title} subtitle={subtitle}><Notice tone="info" word="Read only">Viewers cannot raise tags.</Notice></Screen>;
         }
         if (item.archived) {
