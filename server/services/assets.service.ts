@@ -17,8 +17,8 @@ import { toAssetDto } from '@/server/services/register.dto';
 import type { Asset as AssetDto } from '@/shared/types/register';
 import type { ListResponse } from '@/shared/types/api';
 import { siteWhere, visibleSiteIds } from '@/server/services/site-access.service';
+import type { Paging } from '@/shared/rules/paging';
 
-type Paging = { page: number; pageSize: number; offset: number };
 
 export const SITE_PLANT_ID_INDEX = 'assets_site_plant_id_unique';
 

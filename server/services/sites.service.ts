@@ -11,8 +11,8 @@ import { isValidTimeZone } from '@/shared/rules/time-zone';
 import type { Site as SiteDto } from '@/shared/types/register';
 import type { ListResponse } from '@/shared/types/api';
 import { siteWhere } from '@/server/services/site-access.service';
+import type { Paging } from '@/shared/rules/paging';
 
-type Paging = { page: number; pageSize: number; offset: number };
 
 /** The zone as the IANA database spells it (`europe/london` → `Europe/London`), or a 422 naming the field. */
 function canonicalZone(timeZone: string): string {

@@ -23,7 +23,7 @@ export async function getTag(actor: AuthUser, id: number): Promise<TagDto> {
   return { ...toTagDto(tag, await loadEvents(tag.id)), photoCount: photos.length, photos: photos.map(toPhotoDto) };
 }
 
-export interface TagFilters {
+interface TagFilters {
   status?: string;
   /** Only live tags with an open hand-over offer to the caller. */
   offeredToMe?: boolean;

@@ -20,9 +20,9 @@ import type { Tag as TagDto } from '@/shared/types/tags';
 import type { EndVisitInput, StartVisitInput, VisitFiltersQuery } from '@/shared/schemas/visits';
 import type { ListResponse } from '@/shared/types/user';
 import type { Visit as VisitDto, VisitDecision as VisitDecisionDto } from '@/shared/types/visits';
+import type { Paging } from '@/shared/rules/paging';
 
-type Paging = { page: number; pageSize: number; offset: number };
-export type VisitFilters = Pick<VisitFiltersQuery, 'userId' | 'from' | 'to' | 'open'>;
+type VisitFilters = Pick<VisitFiltersQuery, 'userId' | 'from' | 'to' | 'open'>;
 
 const include = [{ model: Site, as: 'site' }, { model: User, as: 'user', attributes: ['id', 'name'] }];
 
