@@ -12,7 +12,7 @@ import { recordOpened } from '@/server/services/recent-places.service';
 import type { PlantRoomInput } from '@/shared/schemas/register';
 import type { PlantRoom as PlantRoomDto, SafetyLocations } from '@/shared/types/register';
 import type { ListResponse } from '@/shared/types/api';
-import type { Paging } from '@/shared/rules/paging';
+import { listPage, pageRows, type Paging } from '@/shared/rules/paging';
 
 type PlantRoomPatch = Partial<Omit<PlantRoomInput, 'siteId' | 'safety'>> & { safety?: Partial<SafetyLocations> };
 
@@ -45,10 +45,9 @@ export async function listSitePlantRooms(actor: AuthUser, siteId: number, paging
     where: { siteId, organisationId: actor.organisationId },
     include,
     order: [['name', 'ASC'], ['id', 'ASC']],
-    limit: paging.pageSize,
-    offset: paging.offset,
+    ...pageRows(paging),
   });
-  return { items: await toDtos(rows), total: count, page: paging.page, pageSize: paging.pageSize };
+  return listPage(await toDtos(rows), count, paging);
 }
 
 async function getPlantRoom(actor: AuthUser, id: number): Promise<PlantRoomDto> {
