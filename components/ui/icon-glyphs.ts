@@ -45,6 +45,7 @@ export const ICON_GLYPHS = {
   'clipboard-check-outline': 0xf08a8,
   'clock-alert': 0xf0955,
   'close': 0xf0156,
+  'cloud-off-outline': 0xf0164,
   'cloud-upload-outline': 0xf0b7e,
   'cog': 0xf0493,
   'contain': 0xf0a3e,

@@ -2,9 +2,9 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { expect } from 'vitest';
-
-export { CHROMIUM, CHROMIUM_ARGS } from '@/test/e2e/support/chromium';
 import { CHROMIUM, CHROMIUM_ARGS } from '@/test/e2e/support/chromium';
+
+export { CHROMIUM, CHROMIUM_ARGS };
 
 export const PHONE = { width: 390, height: 844 };
 export const DESKTOP = { width: 1440, height: 900 };

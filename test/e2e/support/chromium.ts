@@ -1,4 +1,4 @@
-// Debian's Chromium and the flags every test and the bench launch it with (no vitest here: npm run bench imports it).
+// Debian's Chromium and its flags, free of test-runner imports so scripts (npm run bench) can use them too.
 export const CHROMIUM = '/usr/bin/chromium';
 
 // Chromium's own background calls would otherwise try the network, which this product never needs.
