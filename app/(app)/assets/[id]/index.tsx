@@ -19,6 +19,7 @@ import { Breadcrumbs } from '@/components/register/breadcrumbs';
 import { ASSET_TYPE_ICONS } from '@/components/register/register-vocabulary';
 import { errorMessage } from '@/hooks/api/request';
 import { useAddAssetPhotoMutation, useArchiveAssetMutation, useAssetQuery } from '@/hooks/api/use-assets';
+import { useTagsQuery } from '@/hooks/api/use-tags';
 import { usePermissions } from '@/hooks/auth/use-permissions';
 import { useNow } from '@/components/tags/use-now';
 import { VisitBanner } from '@/components/visits/visit-banner';
@@ -39,6 +40,9 @@ export default function AssetScreen() {
   const archive = useArchiveAssetMutation();
   const [confirming, setConfirming] = useState(false);
   const now = useNow();
+  // The rest of the record waits for the item's state (its tags): a scanned label answers "is it isolated?" first.
+  const tags = useTagsQuery({ assetId: id });
+  const stateShown = tags.data !== undefined || tags.isError;
   return (
     <QueryScreen query={asset} title="Plant item">
       {(a) => {
@@ -50,8 +54,8 @@ export default function AssetScreen() {
             title={`${a.plantId} · ${a.name}`}
             actions={
               <>
-                {canEdit ? <Button title="Edit" onPress={() => router.push(`/assets/${id}/edit`)} testID="asset-edit" /> : null}
-                {perms.canArchive && !a.archived ? <Button title="Archive" variant="secondary" onPress={() => setConfirming(true)} testID="asset-archive" /> : null}
+                  {canEdit ? <Button title="Edit" onPress={() => router.push(`/assets/${id}/edit`)} testID="asset-edit" /> : null}
+                  {perms.canArchive && !a.archived ? <Button title="Archive" variant="secondary" onPress={() => setConfirming(true)} testID="asset-archive" /> : null}
               </>
             }
           >
@@ -67,13 +71,17 @@ export default function AssetScreen() {
             <ItemOffline asset={a} />
             {a.archived ? null : <VisitBanner siteId={a.siteId} siteName={a.siteName} next={`/assets/${id}`} now={now} />}
             <AssetDetails asset={a} />
-            <ConnectionsCard asset={a} />
-            <AssetReadingsSection asset={a} />
-            <Card>
-              <Text variant="title">Photos</Text>
-              <PhotoGallery photos={a.photos ?? []} subject={a.plantId} onAdd={perms.canAdd && !a.archived ? (p) => addPhoto.mutateAsync(p) : undefined} adding={addPhoto.isPending} />
-            </Card>
-            <AssetLabelCard asset={a} />
+            {stateShown ? (
+              <>
+              <ConnectionsCard asset={a} />
+              <AssetReadingsSection asset={a} />
+              <Card>
+                <Text variant="title">Photos</Text>
+                <PhotoGallery photos={a.photos ?? []} subject={a.plantId} onAdd={perms.canAdd && !a.archived ? (p) => addPhoto.mutateAsync(p) : undefined} adding={addPhoto.isPending} />
+              </Card>
+              <AssetLabelCard asset={a} />
+              </>
+            ) : null}
             <Text variant="small" muted>{`Added by ${a.createdBy.name}`}</Text>
             <ConfirmDialog
               visible={confirming}
