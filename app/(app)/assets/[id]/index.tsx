@@ -73,13 +73,13 @@ export default function AssetScreen() {
             <AssetDetails asset={a} />
             {stateShown ? (
               <>
-              <ConnectionsCard asset={a} />
-              <AssetReadingsSection asset={a} />
-              <Card>
-                <Text variant="title">Photos</Text>
-                <PhotoGallery photos={a.photos ?? []} subject={a.plantId} onAdd={perms.canAdd && !a.archived ? (p) => addPhoto.mutateAsync(p) : undefined} adding={addPhoto.isPending} />
-              </Card>
-              <AssetLabelCard asset={a} />
+                <ConnectionsCard asset={a} />
+                <AssetReadingsSection asset={a} />
+                <Card>
+                  <Text variant="title">Photos</Text>
+                  <PhotoGallery photos={a.photos ?? []} subject={a.plantId} onAdd={perms.canAdd && !a.archived ? (p) => addPhoto.mutateAsync(p) : undefined} adding={addPhoto.isPending} />
+                </Card>
+                <AssetLabelCard asset={a} />
               </>
             ) : null}
             <Text variant="small" muted>{`Added by ${a.createdBy.name}`}</Text>
