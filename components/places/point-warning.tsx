@@ -13,7 +13,7 @@ export const pointWarningText = (forPlantId: string, holderName: string) => `Do 
 export function PointWarning({ point, tag }: { point: TagPoint; tag: Tag }) {
   if (!point.asset) return null;
   return (
-    <Link href={`/assets/${point.asset.id}` as never} asChild>
+    <Link href={`/assets/${point.asset.id}`} asChild>
       <Pressable style={styles.box} accessibilityRole="link" testID={`point-warning-${point.asset.id}`}>
         <MaterialCommunityIcons name="hand-back-left-off" size={22} color={colors.danger} />
         <View style={{ flex: 1 }}>
