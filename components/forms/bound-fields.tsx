@@ -6,7 +6,7 @@ import { TextField } from '@/components/ui/text-field';
 import { colors, space } from '@/components/theme';
 
 /** A field's message once it has been touched or the form submitted. */
-function useFieldError(name: string): string | undefined {
+export function useFieldError(name: string): string | undefined {
   const { errors, touched, submitCount } = useFormikContext();
   const error = getIn(errors, name) as unknown;
   return typeof error === 'string' && (getIn(touched, name) || submitCount > 0) ? error : undefined;

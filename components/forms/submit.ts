@@ -1,4 +1,4 @@
-import { prepareDataForValidation, setIn, type FormikErrors, type FormikHelpers } from 'formik';
+import { getIn, prepareDataForValidation, setIn, type FormikErrors, type FormikHelpers } from 'formik';
 import type { AnySchema } from 'yup';
 import { RequestError, errorMessage } from '@/hooks/api/request';
 import { validateFields } from '@/shared/schemas/field-errors';
@@ -20,10 +20,18 @@ export const prepareValues = <T extends object>(values: T) => prepareDataForVali
 /** A form whose field names differ from the API's (a number typed in a unit) maps each API path to its own. */
 export type FieldPathMap = (apiPath: string) => string;
 
-/** Flat field messages (`attributes.capacityL`, `points[0].method`) as Formik's nested errors. */
+/**
+ * Flat field messages (`attributes.capacityL`, `points[0].method`) as Formik's nested errors. A message on a
+ * whole entry (`points[0]`) and one on its part (`points[0].method`) cannot both nest: the first one stays.
+ */
 export function nestErrors<T>(fields: FieldErrors, pathFor: FieldPathMap = (p) => p): FormikErrors<T> {
   let nested: FormikErrors<T> = {};
-  for (const [path, message] of Object.entries(fields)) nested = setIn(nested, pathFor(path), message);
+  for (const [apiPath, message] of Object.entries(fields)) {
+    const path = pathFor(apiPath);
+    const parts = path.split(/[.[\]]+/).filter(Boolean);
+    const taken = parts.some((_, i) => getIn(nested, parts.slice(0, i + 1)) !== undefined);
+    if (!taken) nested = setIn(nested, path, message);
+  }
   return nested;
 }
 
@@ -59,18 +67,10 @@ export async function submitForm<T, R>(helpers: Helpers<T>, action: () => Promis
 
 /**
  * A Formik `validate` from a shared schema, run on the body the server will get (`toBody`), with `context`
- * for rules that depend on the tag's kind or the actor's role. The server runs the same schema.
+ * for rules that depend on the tag's kind or the actor's role (a function when it holds the time now).
+ * The server runs the same schema.
  */
 export const validateWithSchema =
-  <T>(schema: AnySchema, toBody: (values: T) => unknown = (v) => v, context?: Record<string, unknown>) =>
+  <T>(schema: AnySchema, toBody: (values: T) => unknown = (v) => v, context?: Record<string, unknown> | (() => Record<string, unknown>)) =>
   async (values: T): Promise<FormikErrors<T>> =>
-    nestErrors<T>(await validateFields(schema, toBody(values), context));
-
-/** Errors worth showing: all of them once the person has tried to submit, before that only touched fields. */
-export function visibleErrors(errors: object, touched: Record<string, unknown>, submitCount: number): Record<string, string | undefined> {
-  const out: Record<string, string | undefined> = {};
-  for (const [k, v] of Object.entries(errors as Record<string, unknown>)) {
-    if (typeof v === 'string' && (submitCount > 0 || touched[k.split('.')[0]])) out[k] = v;
-  }
-  return out;
-}
+    nestErrors<T>(await validateFields(schema, toBody(values), typeof context === 'function' ? context() : context));
