@@ -12,7 +12,8 @@ import { useMeQuery } from '@/hooks/api/use-auth';
 import { useIsolationPlanQuery } from '@/hooks/api/use-connections';
 import { useSiteQuery } from '@/hooks/api/use-sites';
 import { ENERGY_SOURCES, type EnergySource } from '@/shared/rules/register';
-import { mayRaise, type TagKind } from '@/shared/rules/tags';
+import type { TagKind } from '@/shared/rules/tags';
+import { usePermissions } from '@/hooks/auth/use-permissions';
 
 export default function RaiseTagScreen() {
   const params = useLocalSearchParams<{ assetId?: string; kind?: string; planSources?: string }>();
@@ -22,6 +23,7 @@ export default function RaiseTagScreen() {
   const asset = useAssetQuery(assetId);
   const site = useSiteQuery(asset.data?.siteId ?? 0);
   const me = useMeQuery().data;
+  const { may } = usePermissions();
   // Opened from an isolation plan: the same plan again, to fill the form's sources and points.
   const planSources = (params.planSources ?? '').split(',').filter((s): s is EnergySource => (ENERGY_SOURCES as readonly string[]).includes(s));
   const plan = useIsolationPlanQuery(assetId, planSources, kind === 'isolation' && planSources.length > 0);
@@ -39,7 +41,7 @@ export default function RaiseTagScreen() {
       {(item) => {
         const title = 'Raise a tag';
         const subtitle = `${item.plantId} · ${item.name} · ${item.siteName}`;
-        if (!me || !mayRaise(me)) {
+        if (!me || !may('raiseTag')) {
           return <Screen title={title} subtitle={subtitle}><Notice tone="info" word="Read only">Viewers cannot raise tags.</Notice></Screen>;
         }
         if (item.archived) {
