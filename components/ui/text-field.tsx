@@ -1,32 +1,40 @@
-import { forwardRef } from 'react';
+import { forwardRef, type ReactNode } from 'react';
 import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
 import { colors, fonts, layout, radius, space, type as typeScale } from '@/components/theme';
 import { Text } from '@/components/ui/text';
 
-interface Props extends TextInputProps {
+interface FrameProps {
   label: string;
   error?: string | false;
   hint?: string;
+  /** nativeID of the label, for inputs that point at it. */
+  labelID?: string;
 }
 
-export const TextField = forwardRef<TextInput, Props>(function TextField({ label, error, hint, style, ...rest }, ref) {
+/** A field's label, hint and message around its input (a text box, a box with units, a row of boxes). */
+export function FieldFrame({ label, error, hint, labelID, children }: FrameProps & { children: ReactNode }) {
   return (
     <View style={styles.wrap}>
-      <Text variant="label" bold>{label}</Text>
+      <Text variant="label" bold nativeID={labelID}>{label}</Text>
       {hint ? <Text variant="small" muted>{hint}</Text> : null}
-      <TextInput
-        ref={ref}
-        accessibilityLabel={label}
-        placeholderTextColor={colors.inkMuted}
-        {...rest}
-        style={[styles.input, error ? styles.inputError : null, style]}
-      />
+      {children}
       {error ? (
         <Text variant="small" style={styles.error} accessibilityLiveRegion="polite">
           ⚠ {error}
         </Text>
       ) : null}
     </View>
+  );
+}
+
+/** The look of every text box: large, high-contrast, red-bordered when its field has a message. */
+export const inputStyle = (error?: string | false) => [styles.input, error ? styles.inputError : null];
+
+export const TextField = forwardRef<TextInput, TextInputProps & FrameProps>(function TextField({ label, error, hint, labelID, style, ...rest }, ref) {
+  return (
+    <FieldFrame label={label} error={error} hint={hint} labelID={labelID}>
+      <TextInput ref={ref} accessibilityLabel={label} placeholderTextColor={colors.inkMuted} {...rest} style={[...inputStyle(error), style]} />
+    </FieldFrame>
   );
 });
 

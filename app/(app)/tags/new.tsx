@@ -47,7 +47,8 @@ export default function RaiseTagScreen() {
         if (item.archived) {
           return <Screen title={title} subtitle={subtitle}><Notice tone="info" word="Archived">This item is archived, so no tags can be raised on it.</Notice></Screen>;
         }
-        if (site.isError) {
+        // A site kept from an earlier visit serves with no signal, as the item does; only with none is it an error.
+        if (site.isError && !site.data) {
           return <Screen title={title} subtitle={subtitle}><Notice tone="danger" word="Cannot load the site">{errorMessage(site.error)}</Notice></Screen>;
         }
         if (!site.data || (plan.isFetching && !plan.data)) return <LoadingView />;
