@@ -9,6 +9,8 @@ export interface FormStatus {
   status: number;
   code: ErrorCode | 'unknown';
   message: string;
+  /** The refusal's field messages as the server named them. */
+  fields?: FieldErrors;
 }
 
 /**
@@ -38,7 +40,7 @@ export function nestErrors<T>(fields: FieldErrors, pathFor: FieldPathMap = (p) =
 /** A failure as a form status: the HTTP status (0 without an answer), the code and the server's words. */
 export function failureStatus(err: unknown): FormStatus {
   return err instanceof RequestError
-    ? { status: err.status, code: err.code, message: err.message }
+    ? { status: err.status, code: err.code, message: err.message, fields: err.fields }
     : { status: 0, code: 'unknown', message: errorMessage(err) };
 }
 

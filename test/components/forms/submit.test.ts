@@ -25,7 +25,7 @@ describe('the form kit', () => {
     const result = await submitForm(h, () => Promise.reject(new RequestError(422, 'invalid', 'Confirm every release check before clearing an isolation.', { 'checks.testedSafe': 'Confirm this before clearing.' })));
     expect(result).toBeUndefined();
     expect(h.seen.errors).toEqual({ checks: { testedSafe: 'Confirm this before clearing.' } });
-    expect(h.seen.status).toEqual({ status: 422, code: 'invalid', message: 'Confirm every release check before clearing an isolation.' });
+    expect(h.seen.status).toEqual({ status: 422, code: 'invalid', message: 'Confirm every release check before clearing an isolation.', fields: { 'checks.testedSafe': 'Confirm this before clearing.' } });
   });
 
   it('clears the banner and answers the action’s result when it succeeds', async () => {
