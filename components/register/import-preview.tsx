@@ -3,6 +3,7 @@ import { colors, radius, space } from '@/components/theme';
 import { DataTable } from '@/components/ui/data-table';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
+import type { ConnectionImportResult } from '@/shared/types/connections';
 import type { ImportResult, ImportRowError } from '@/shared/types/register';
 
 function Count({ label, value, testID }: { label: string; value: number; testID: string }) {
@@ -14,16 +15,24 @@ function Count({ label, value, testID }: { label: string; value: number; testID:
   );
 }
 
-/** What an import would do (dry run) or did: counts, and every row the server refused with its reason. */
-export function ImportPreview({ result }: { result: ImportResult }) {
+/**
+ * What an import would do (dry run) or did: counts, and every row the server refused with its reason. A register
+ * import adds and updates items; a connections import only adds links, and says how many were already recorded.
+ */
+export function ImportPreview({ result, testID = 'import' }: { result: ImportResult | ConnectionImportResult; testID?: string }) {
   const bad = result.errors.length;
+  const updates = 'updated' in result;
   return (
     <View style={{ gap: space.md }}>
       <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm }}>
-        <Count label="rows read" value={result.rows} testID="import-rows" />
-        <Count label={result.dryRun ? 'would be added' : 'added'} value={result.created} testID="import-created" />
-        <Count label={result.dryRun ? 'would be updated' : 'updated'} value={result.updated} testID="import-updated" />
-        <Count label="problems" value={bad} testID="import-errors" />
+        <Count label="rows read" value={result.rows} testID={`${testID}-rows`} />
+        <Count label={result.dryRun ? 'would be added' : 'added'} value={result.created} testID={`${testID}-created`} />
+        {updates ? (
+          <Count label={result.dryRun ? 'would be updated' : 'updated'} value={result.updated} testID={`${testID}-updated`} />
+        ) : (
+          <Count label="already recorded" value={result.unchanged} testID={`${testID}-unchanged`} />
+        )}
+        <Count label="problems" value={bad} testID={`${testID}-errors`} />
       </View>
       {bad ? (
         <>
@@ -37,13 +46,13 @@ export function ImportPreview({ result }: { result: ImportResult }) {
             ]}
             rows={result.errors}
             rowKey={(e) => `${e.row}-${e.column}-${e.message}`}
-            testID="import-error-table"
+            testID={`${testID}-error-table`}
           />
         </>
       ) : result.dryRun ? (
         <Notice tone="safe" word="Ready">{`No problems found in ${result.rows} ${result.rows === 1 ? 'row' : 'rows'}. Nothing has changed yet.`}</Notice>
       ) : (
-        <Notice tone="safe" word="Imported">{`${result.created} added and ${result.updated} updated.`}</Notice>
+        <Notice tone="safe" word="Imported">{updates ? `${result.created} added and ${result.updated} updated.` : `${result.created} added; ${result.unchanged} already recorded.`}</Notice>
       )}
     </View>
   );

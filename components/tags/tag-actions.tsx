@@ -14,7 +14,7 @@ import { ProveForm } from '@/components/tags/prove-form';
 import { ReassignInAbsenceForm } from '@/components/tags/reassign-in-absence-form';
 import { TagNoteForm } from '@/components/tags/tag-note-form';
 import { handoverRole } from '@/shared/rules/tag-handover';
-import { clearancePermission } from '@/shared/rules/tags';
+import { clearancePermission } from '@/shared/rules/permissions';
 import { usePermissions } from '@/hooks/auth/use-permissions';
 import type { Tag } from '@/shared/types/tags';
 import type { User } from '@/shared/types/user';

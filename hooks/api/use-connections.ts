@@ -2,7 +2,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { fetchBlob, request } from '@/hooks/api/request';
 import type { EnergySource } from '@/shared/rules/register';
 import type { ConnectionInput } from '@/shared/schemas/connections';
-import type { AssetConnections, ClosingAffects, Connection, IsolationPlan, PlantRoomDiagram } from '@/shared/types/connections';
+import type { AssetConnections, ClosingAffects, Connection, ConnectionImportResult, IsolationPlan, PlantRoomDiagram } from '@/shared/types/connections';
 
 export const connectionKeys = {
   all: ['connections'] as const,
@@ -47,7 +47,20 @@ export function useDeleteConnectionMutation() {
   });
 }
 
-/** One site's connections as CSV (site, from, to, medium), fetched with the token. */
+/** One site's connections (or, with null, every site's) as CSV (site, from, to, medium), fetched with the token. */
 export function useExportConnectionsMutation() {
-  return useMutation({ mutationFn: (siteId: number) => fetchBlob(`/api/connections/export.csv?siteId=${siteId}`) });
+  return useMutation({ mutationFn: (siteId: number | null) => fetchBlob(`/api/connections/export.csv${siteId ? `?siteId=${siteId}` : ''}`) });
+}
+
+/** Checks a connections CSV (dry run) or adds its links; an import never removes a link. */
+export function useImportConnectionsMutation() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ file, dryRun }: { file: Blob; dryRun: boolean }) => {
+      const form = new FormData();
+      form.append('file', file, file instanceof File ? file.name : 'connections.csv');
+      return request<ConnectionImportResult>(`/connections/import?dryRun=${dryRun}`, { method: 'POST', body: form });
+    },
+    onSuccess: async (result) => { if (!result.dryRun) await qc.invalidateQueries({ queryKey: connectionKeys.all }); },
+  });
 }

@@ -10,6 +10,7 @@ export const MAIL_KINDS = [
   'my-tag-cleared-in-absence',
   'my-tag-handed-over',
   'my-tag-reassigned-in-absence',
+  'tag-reassigned-to-you',
   'digest',
   'invite',
   'password-reset',

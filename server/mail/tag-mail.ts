@@ -34,7 +34,8 @@ export interface TagSnapshot {
  * raised / cleared / cleared in absence → supervisors and admins who want them (not the person who did it);
  * handed over → the person who held the tag, if they want mail about their tags;
  * cleared or reassigned in absence → the person who held the tag, whatever their settings (they must know before
- * they go back to work), and supervisors and admins who want clearance mail.
+ * they go back to work), and supervisors and admins who want clearance mail;
+ * reassigned in absence → also the new holder, whatever their settings: they now answer for a lock they did not fit.
  */
 export async function enqueueTagMail(
   event: TagMailEvent,
@@ -81,6 +82,14 @@ export async function enqueueTagMail(
       personal.add(owner.id);
       const kind = event === 'handed-over' ? 'my-tag-handed-over' : event === 'reassigned-in-absence' ? 'my-tag-reassigned-in-absence' : 'my-tag-cleared-in-absence';
       mails.push({ organisationId: tag.organisationId, kind, toEmail: owner.email, toUserId: owner.id, payload: { ...base, recipientName: owner.name } });
+    }
+  }
+
+  if (event === 'reassigned-in-absence' && tag.holderId !== actor.id) {
+    const taker = await User.findOne({ where: { id: tag.holderId, organisationId: tag.organisationId }, transaction });
+    if (taker) {
+      personal.add(taker.id);
+      mails.push({ organisationId: tag.organisationId, kind: 'tag-reassigned-to-you', toEmail: taker.email, toUserId: taker.id, payload: { ...base, recipientName: taker.name } });
     }
   }
 

@@ -65,6 +65,13 @@ function tagMail(kind: MailKind, p: TagPayload, url: (path: string) => string): 
         // OSHA 29 CFR 1910.147(e)(3)(iii): the employee is to be told before resuming work.
         { caution: `Your lock may have been removed. Acknowledge this in Isoledger and speak to ${p.actor.name} before you resume any work. ${RECORD_ONLY}` },
       ]);
+    case 'tag-reassigned-to-you':
+      return renderBlocks(`You now hold the ${word.toLowerCase()} on ${where}`, [
+        { p: `${p.recipientName}, ${p.actor.name} moved this ${word.toLowerCase()} tag to you in its holder’s absence. The record now names you as its holder${t.kind === 'isolation' && t.lockNumber ? `, with lock ${t.lockNumber}` : ''}.` },
+        { facts: [['Reason', p.reason ?? '—']] }, tagFacts(t), ...links,
+        // OSHA 29 CFR 1910.147(e)(3): removing another person's device follows the employer's specific procedure.
+        { caution: `${t.kind === 'isolation' ? 'Before anyone works on this item, check on site that your own lock is on every isolation point and prove the isolation again' : 'Check on site that the override is still as the tag records it'} under your site procedure. ${RECORD_ONLY}` },
+      ]);
     case 'my-tag-handed-over':
       return renderBlocks(`Your ${word.toLowerCase()} on ${where} was handed over to ${p.actor.name}`, [
         { p: `${p.recipientName}, ${p.actor.name} accepted your hand-over and now holds the ${word.toLowerCase()} tag.` },

@@ -59,14 +59,18 @@ export const auth =
     }
   };
 
+/** A route's permission check; it names its permission, so tests read from the router which route needs which. */
+export type PermissionGuard = RequestHandler & { readonly permission: RolePermission };
+
 /** Refuses (403) an actor the permission map (shared/rules/permissions.ts) does not allow; behind `auth`. */
-export const requirePermission =
-  (permission: RolePermission): RequestHandler =>
-  (req, _res, next) => {
+export function requirePermission(permission: RolePermission): PermissionGuard {
+  const guard: RequestHandler = (req, _res, next) => {
     if (!req.user) return next(unauthenticated());
     if (!may(req.user, permission)) return next(forbidden());
     next();
   };
+  return Object.assign(guard, { permission });
+}
 
 /** The same check inside a service, where the refusal can say why in the trade's words. */
 export function ensurePermission(actor: AuthUser, permission: RolePermission, message?: string) {

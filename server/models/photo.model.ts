@@ -15,6 +15,8 @@ export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes
   declare bytes: number;
   declare caption: string | null;
   declare createdBy: number;
+  /** The Idempotency-Key it was sent with, so a repeat from an outbox stores it once. */
+  declare idempotencyKey: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare creator?: NonAttribute<User>;
 
@@ -33,6 +35,7 @@ export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes
         bytes: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         caption: { type: DataTypes.STRING(200), allowNull: true },
         createdBy: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        idempotencyKey: { type: DataTypes.STRING(100), allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'photos', underscored: true, updatedAt: false },

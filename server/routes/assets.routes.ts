@@ -48,7 +48,7 @@ export function assetsRoutes({ config, sequelize, storage }: AppContext) {
   });
   router.post('/assets/:id/photos', signedIn, requirePermission('addToRegister'), validate({ params: idParams }), singleFileUpload('photo', MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
     const file = requireFile(req, 'photo', 'photo');
-    res.status(201).json(await addPhoto(currentUser(req), storage!, { assetId: pathId(req) }, file, req.body?.caption));
+    res.status(201).json(await addPhoto(currentUser(req), storage!, { assetId: pathId(req) }, file, req.body?.caption, req.get('idempotency-key')?.trim().slice(0, 100) || null));
   });
   return router;
 }

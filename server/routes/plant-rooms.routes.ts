@@ -25,7 +25,7 @@ export function plantRoomsRoutes({ config, storage }: AppContext) {
   });
   router.post('/plant-rooms/:id/photos', signedIn, editors, validate({ params: idParams }), singleFileUpload('photo', MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
     const file = requireFile(req, 'photo', 'photo');
-    res.status(201).json(await addPhoto(currentUser(req), storage!, { plantRoomId: pathId(req) }, file, req.body?.caption));
+    res.status(201).json(await addPhoto(currentUser(req), storage!, { plantRoomId: pathId(req) }, file, req.body?.caption, req.get('idempotency-key')?.trim().slice(0, 100) || null));
   });
   return router;
 }

@@ -4,7 +4,7 @@ import type { AuthUser } from '@/server/middleware/auth';
 import { Asset } from '@/server/models/asset.model';
 import { Connection } from '@/server/models/connection.model';
 import { User } from '@/server/models/user.model';
-import { assertCanEdit } from '@/server/services/register-access';
+import { assertCanEdit } from '@/server/services/register.lookup';
 import { MEDIUM_LABELS, canCarry, type Medium } from '@/shared/rules/connections';
 import { ASSET_TYPE_LABELS } from '@/shared/rules/register';
 import type { ConnectionInput } from '@/shared/schemas/connections';

@@ -7,7 +7,7 @@ import { Asset } from '@/server/models/asset.model';
 import { HeatingSystem as HeatingSystemRow } from '@/server/models/heating-system.model';
 import { User } from '@/server/models/user.model';
 import { describeSettings, expansionSettingsFor, runExpansionCheck } from '@/server/services/calc.service';
-import { findSite } from '@/server/services/register-access';
+import { findSite } from '@/server/services/register.lookup';
 import { expansionInputsFor, SYSTEM_FILL_AND_CURVE_KEYS, type RegisterContext } from '@/shared/rules/readings';
 import type { GasFamily } from '@/shared/calc';
 import type { HeatingSystemInput } from '@/shared/schemas/readings';

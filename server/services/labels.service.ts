@@ -1,7 +1,7 @@
 import { Op, type Sequelize, type WhereOptions } from 'sequelize';
 import { clock } from '@/server/lib/clock';
 import { HttpError, notFound } from '@/server/lib/http-error';
-import { assertCanEdit } from '@/server/services/register-access';
+import { assertCanEdit } from '@/server/services/register.lookup';
 import { renderLabelsPdf } from '@/server/lib/label-pdf';
 import { insertWithLabelCode } from '@/server/lib/unique-clash';
 import { ensurePermission, type AuthUser } from '@/server/middleware/auth';

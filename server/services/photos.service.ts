@@ -1,5 +1,5 @@
 import crypto from 'node:crypto';
-import { Op, QueryTypes, type Transaction } from 'sequelize';
+import { Op, QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import { HttpError, conflict, notFound, unprocessable } from '@/server/lib/http-error';
 import { PhotoNotStoredError, type PhotoStorage } from '@/server/lib/photo-storage';
 import { processPhoto } from '@/server/lib/photo-processing';
@@ -9,8 +9,8 @@ import { Photo } from '@/server/models/photo.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { Tag } from '@/server/models/tag.model';
 import { User } from '@/server/models/user.model';
-import { toPhotoDto } from '@/server/services/register-dto';
-import { findPlantRoom } from '@/server/services/register-access';
+import { toPhotoDto } from '@/server/services/register.dto';
+import { findPlantRoom } from '@/server/services/register.lookup';
 import type { Photo as PhotoDto } from '@/shared/types/register';
 import { seesSite, siteWhere, visibleSiteIds } from '@/server/services/site-access.service';
 
@@ -53,8 +53,12 @@ export async function addPhoto(
   owner: { assetId: number } | { plantRoomId: number },
   file: { buffer: Buffer },
   rawCaption?: unknown,
+  idempotencyKey: string | null = null,
 ): Promise<PhotoDto> {
   const caption = readCaption(rawCaption);
+  const earlier = () => sentBefore(actor, owner, idempotencyKey);
+  const repeat = await earlier();
+  if (repeat) return repeat;
   if ('assetId' in owner) {
     const asset = await Asset.findOne({ where: { id: owner.assetId, organisationId: actor.organisationId, ...siteWhere(actor) } });
     if (!asset) throw notFound('Plant item');
@@ -62,15 +66,36 @@ export async function addPhoto(
   } else {
     await findPlantRoom(actor, owner.plantRoomId);
   }
-  const photo = await storePhoto(storage, { organisationId: actor.organisationId, ...owner, createdBy: actor.id, caption }, file.buffer);
+  let photo: Photo;
+  try {
+    photo = await storePhoto(storage, { organisationId: actor.organisationId, ...owner, createdBy: actor.id, caption, idempotencyKey }, file.buffer);
+  } catch (err) {
+    // Two copies of the same request at once: the unique index lets one in; the other answers with it.
+    const first = err instanceof UniqueConstraintError ? await earlier() : null;
+    if (first) return first;
+    throw err;
+  }
   await photo.reload({ include: [withCreator] });
+  return toPhotoDto(photo);
+}
+
+/**
+ * The photo this person already added with this Idempotency-Key (an outbox sending again after a lost answer),
+ * or null; the same key for another item or room is refused (422) rather than answered with the wrong photo.
+ */
+async function sentBefore(actor: AuthUser, owner: { assetId: number } | { plantRoomId: number }, key: string | null): Promise<PhotoDto | null> {
+  if (!key) return null;
+  const photo = await Photo.findOne({ where: { createdBy: actor.id, idempotencyKey: key }, include: [withCreator] });
+  if (!photo) return null;
+  const same = 'assetId' in owner ? photo.assetId === owner.assetId : photo.plantRoomId === owner.plantRoomId;
+  if (!same) throw new HttpError(422, 'idempotency-key-reused', 'This Idempotency-Key was already used for a different request. Send a new key for a new action.');
   return toPhotoDto(photo);
 }
 
 /** Re-encodes an image (processPhoto), writes it and its thumbnail to storage, and records it. */
 export async function storePhoto(
   storage: PhotoStorage,
-  row: { organisationId: number; assetId?: number; plantRoomId?: number; tagId?: number; createdBy: number; caption: string | null },
+  row: { organisationId: number; assetId?: number; plantRoomId?: number; tagId?: number; createdBy: number; caption: string | null; idempotencyKey?: string | null },
   input: Buffer,
   transaction?: Transaction,
 ): Promise<Photo> {
@@ -91,6 +116,7 @@ export async function storePhoto(
       bytes: processed.image.length,
       caption: row.caption,
       createdBy: row.createdBy,
+      idempotencyKey: row.idempotencyKey ?? null,
     },
     { transaction },
   );

@@ -4,8 +4,9 @@ import { notFound, unprocessable } from '@/server/lib/http-error';
 import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
 import { ProcedureReview } from '@/server/models/procedure-review.model';
 import { User } from '@/server/models/user.model';
-import { findSite } from '@/server/services/register-access';
+import { findSite } from '@/server/services/register.lookup';
 import { visibleSiteIds } from '@/server/services/site-access.service';
+import { rolesWith } from '@/shared/rules/permissions';
 import { isReviewOverdue, reviewDueOn } from '@/shared/rules/procedure-review';
 import { localDate } from '@/shared/rules/time-zone';
 import type { ProcedureReviewInput } from '@/shared/schemas/procedure-reviews';
@@ -42,7 +43,7 @@ export async function createProcedureReview(actor: AuthUser, siteId: number, inp
   const ids = [...new Set(input.observedUserIds)];
   // OSHA 29 CFR 1910.147(c)(6)(i)(A): the inspection is performed by an authorized employee other than the one(s) using the procedure.
   if (ids.includes(actor.id)) fields.observedUserIds = 'The reviewer cannot be one of the engineers observed.';
-  const people = await User.findAll({ where: { id: { [Op.in]: ids }, organisationId: actor.organisationId, role: { [Op.ne]: 'viewer' } }, order: [['name', 'ASC']] });
+  const people = await User.findAll({ where: { id: { [Op.in]: ids }, organisationId: actor.organisationId, role: rolesWith('holdTags') }, order: [['name', 'ASC']] });
   if (!fields.observedUserIds && people.length !== ids.length) fields.observedUserIds = 'Choose engineers of your organisation.';
   if (Object.keys(fields).length) throw unprocessable('Some fields need attention.', fields);
   const row = await ProcedureReview.create({

@@ -7,7 +7,7 @@ import { Asset } from '@/server/models/asset.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { Reading } from '@/server/models/reading.model';
 import { User } from '@/server/models/user.model';
-import { findSite } from '@/server/services/register-access';
+import { findSite } from '@/server/services/register.lookup';
 import type { CheckFlagLevel } from '@/shared/calc';
 import type { LatestFlaggedReading } from '@/shared/types/readings';
 

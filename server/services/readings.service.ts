@@ -8,7 +8,7 @@ import { Asset } from '@/server/models/asset.model';
 import { Reading } from '@/server/models/reading.model';
 import { User } from '@/server/models/user.model';
 import { registerContextFor } from '@/server/services/heating-systems.service';
-import { toReadingSet } from '@/server/services/readings-dto';
+import { toReadingSet } from '@/server/services/readings.dto';
 import { pickReadingValues } from '@/shared/rules/reading-keys';
 import { resolveCheckSettings, runReadingChecks } from '@/shared/rules/readings';
 import type { ReadingCorrectionInput, ReadingSetInput } from '@/shared/schemas/readings';
@@ -126,4 +126,4 @@ export async function correctReading(actor: AuthUser, readingId: number, input: 
   }
 }
 
-export { latestReadingsForExport, READING_EXPORT_COLUMNS } from '@/server/services/readings-export';
+export { latestReadingsForExport, READING_EXPORT_COLUMNS } from '@/server/services/readings.export';

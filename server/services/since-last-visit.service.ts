@@ -1,7 +1,7 @@
 import { Op } from 'sequelize';
 import type { AuthUser } from '@/server/middleware/auth';
 import { Visit } from '@/server/models/visit.model';
-import { findPlantRoom, findSite } from '@/server/services/register-access';
+import { findPlantRoom, findSite } from '@/server/services/register.lookup';
 import { readingActivity, tagActivity } from '@/server/services/visit-activity.service';
 import type { SinceLastVisit } from '@/shared/types/visits';
 

@@ -1,16 +1,51 @@
-import type { Sequelize } from 'sequelize';
+/** Actions on one live tag by its holder or a supervisor: prove, clear, clear in absence, extend, notes, photos. Hand-over: tag-handover.service.ts. */
+import type { Sequelize, Transaction } from 'sequelize';
 import { clock } from '@/server/lib/clock';
-import { HttpError, forbidden, unprocessable } from '@/server/lib/http-error';
-import type { AuthUser } from '@/server/middleware/auth';
-import type { Tag } from '@/server/models/tag.model';
-import { appendEvent } from '@/server/services/tag-events';
-import type { Idempotency } from '@/server/services/tag-idempotency';
+import { HttpError, forbidden, notFound, unprocessable } from '@/server/lib/http-error';
+import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
+import type { PhotoStorage } from '@/server/lib/photo-storage';
+import { Tag } from '@/server/models/tag.model';
+import { TagProof } from '@/server/models/tag-proof.model';
+import { storePhoto } from '@/server/services/photos.service';
+import { appendEvent, once, type Idempotency } from '@/server/services/tag-history.service';
 import { createNotice, requireNoPendingNotices } from '@/server/services/tag-notices.service';
-import { actOnTag, recordProof } from '@/server/services/tags.service';
+import { getTag } from '@/server/services/tags.service';
 import { enqueueTagMail } from '@/server/mail/tag-mail';
-import { clearancePermission, expiryProblem, mayExtend } from '@/shared/rules/tags';
+import { clearancePermission, mayExtend } from '@/shared/rules/permissions';
+import { expiryProblem } from '@/shared/rules/tags';
 import type { ClearInAbsenceInput, ClearTagInput, ExtendTagInput, ProofInput } from '@/shared/schemas/tags';
 import type { Tag as TagDto } from '@/shared/types/tags';
+
+/** Locks the tag row for the rest of the transaction; another organisation's tag is a 404. */
+export async function lockTag(actor: AuthUser, id: number, transaction: Transaction): Promise<Tag> {
+  const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId }, transaction, lock: transaction.LOCK.UPDATE }) : null;
+  if (!tag) throw notFound('Tag');
+  return tag;
+}
+
+/** One action on one locked, live tag, once per Idempotency-Key; answers with the tag as it now is. */
+export async function actOnTag(sequelize: Sequelize, actor: AuthUser, id: number, idem: Idempotency | null, run: (tag: Tag, transaction: Transaction) => Promise<void>): Promise<TagDto> {
+  await once(actor, idem, () => sequelize.transaction(async (transaction) => {
+    const tag = await lockTag(actor, id, transaction);
+    requireLive(tag);
+    await run(tag, transaction);
+    return tag.id;
+  }));
+  return getTag(actor, id);
+}
+
+export function requireLive(tag: Tag) {
+  if (tag.status !== 'live') throw new HttpError(409, 'already-cleared', 'This tag has already been cleared.');
+}
+
+/** Records a proof of an isolation (OSHA 29 CFR 1910.147(d)(6)) with its event, inside the caller's transaction. */
+export async function recordProof(tag: Tag, actor: AuthUser, proof: ProofInput, transaction: Transaction, idem: Idempotency | null = null) {
+  const row = await TagProof.create(
+    { tagId: tag.id, organisationId: tag.organisationId, method: proof.method, instrument: proof.instrument, reading: proof.reading, note: proof.note, byId: actor.id, at: clock.now() },
+    { transaction },
+  );
+  await appendEvent(tag, 'proved', actor, { proofId: row.id, method: proof.method, instrument: proof.instrument, reading: proof.reading, note: proof.note }, transaction, idem);
+}
 
 const releaseChecksMissing = (checks: ClearTagInput['checks']) => Object.entries(checks).filter(([, v]) => !v).map(([k]) => k);
 
@@ -79,7 +114,7 @@ export async function extendTag(sequelize: Sequelize, actor: AuthUser, id: numbe
 /** Anyone who can see the tag except a viewer may add a note while it is live. */
 export async function addTagNote(sequelize: Sequelize, actor: AuthUser, id: number, text: string, idem: Idempotency | null = null): Promise<TagDto> {
   return actOnTag(sequelize, actor, id, idem, async (tag, transaction) => {
-    if (actor.role === 'viewer') throw forbidden('Viewers cannot add notes.');
+    ensurePermission(actor, 'annotateTag', 'Viewers cannot add notes.');
     await appendEvent(tag, 'note-added', actor, { text }, transaction, idem);
   });
 }
@@ -94,4 +129,20 @@ export async function proveTag(sequelize: Sequelize, actor: AuthUser, id: number
     if (actor.id !== tag.holderId) throw forbidden('Only the person who holds this isolation can record that they proved it.');
     await recordProof(tag, actor, input, transaction, idem);
   });
+}
+
+/** Adds a photo of the lock or tag in place to a live tag, and records it in the tag's history. */
+export async function addTagPhoto(sequelize: Sequelize, storage: PhotoStorage, actor: AuthUser, id: number, file: Buffer, caption: string | null, idem: Idempotency | null = null): Promise<TagDto> {
+  ensurePermission(actor, 'annotateTag', 'Viewers cannot add photos.');
+  await once(actor, idem, async () => {
+    const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId } }) : null;
+    if (!tag) throw notFound('Tag');
+    if (tag.status !== 'live') throw new HttpError(409, 'already-cleared', 'This tag has been cleared; it takes no new photos.');
+    await sequelize.transaction(async (transaction) => {
+      const photo = await storePhoto(storage, { organisationId: actor.organisationId, tagId: tag.id, createdBy: actor.id, caption }, file, transaction);
+      await appendEvent(tag, 'photo-added', actor, { photoId: photo.id, caption }, transaction, idem);
+    });
+    return tag.id;
+  });
+  return getTag(actor, id);
 }

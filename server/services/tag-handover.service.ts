@@ -1,16 +1,16 @@
+/** Moving a live tag to another holder: offer, withdraw and accept between two people present, or reassignment in the holder's absence. */
 import type { Sequelize, Transaction } from 'sequelize';
 import { clock } from '@/server/lib/clock';
 import { HttpError, forbidden, unprocessable } from '@/server/lib/http-error';
 import type { AuthUser } from '@/server/middleware/auth';
 import type { Tag } from '@/server/models/tag.model';
 import { User } from '@/server/models/user.model';
-import { appendEvent } from '@/server/services/tag-events';
-import type { Idempotency } from '@/server/services/tag-idempotency';
+import { appendEvent, type Idempotency } from '@/server/services/tag-history.service';
 import { createNotice, requireNoPendingNotices } from '@/server/services/tag-notices.service';
-import { actOnTag } from '@/server/services/tags.service';
+import { actOnTag } from '@/server/services/tag-actions.service';
 import { enqueueTagMail } from '@/server/mail/tag-mail';
 import { handoverRole, offerIsOpen, offerLapsesAt } from '@/shared/rules/tag-handover';
-import { mayReassignInAbsence } from '@/shared/rules/tags';
+import { may, mayReassignInAbsence } from '@/shared/rules/permissions';
 import type { HandoverAcceptInput, HandoverOfferInput, ReassignInAbsenceInput } from '@/shared/schemas/tags';
 import type { Tag as TagDto } from '@/shared/types/tags';
 
@@ -31,7 +31,7 @@ async function refuseOthers(tag: Tag, transaction: Transaction): Promise<never> 
 /** A colleague who can hold a tag: same organisation, active, signed up, not a viewer. */
 async function colleague(actor: AuthUser, id: number, field: string, transaction: Transaction) {
   const user = await User.findOne({ where: { id, organisationId: actor.organisationId, active: true }, transaction });
-  if (!user || user.role === 'viewer' || !user.passwordHash) throw unprocessable('Choose a colleague who can hold tags.', { [field]: 'Choose an engineer, supervisor or admin in your organisation.' });
+  if (!user || !may(user, 'holdTags') || !user.passwordHash) throw unprocessable('Choose a colleague who can hold tags.', { [field]: 'Choose an engineer, supervisor or admin in your organisation.' });
   return user;
 }
 

@@ -1,3 +1,4 @@
+/** Notices to a holder whose tag was cleared or reassigned in their absence, and their acknowledgement. */
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import { clock } from '@/server/lib/clock';
 import { HttpError, notFound } from '@/server/lib/http-error';
@@ -6,8 +7,7 @@ import { Asset } from '@/server/models/asset.model';
 import { Tag } from '@/server/models/tag.model';
 import { TagNotice } from '@/server/models/tag-notice.model';
 import { User } from '@/server/models/user.model';
-import { appendEvent } from '@/server/services/tag-events';
-import { once, type Idempotency } from '@/server/services/tag-idempotency';
+import { appendEvent, once, type Idempotency } from '@/server/services/tag-history.service';
 import type { TagNotice as TagNoticeDto } from '@/shared/types/tags';
 
 /** Records that the holder must be told what happened to their tag while they were away. */

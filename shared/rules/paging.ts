@@ -12,3 +12,6 @@ export function readPaging(query: { page?: unknown; pageSize?: unknown }) {
   const pageSize = Math.min(MAX_PAGE_SIZE, Math.max(1, Math.floor(Number(query.pageSize) || DEFAULT_PAGE_SIZE)));
   return { page, pageSize, offset: (page - 1) * pageSize };
 }
+
+/** A page of a list as the services read it: `readPaging`'s answer. */
+export type Paging = ReturnType<typeof readPaging>;

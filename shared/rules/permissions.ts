@@ -1,5 +1,5 @@
 import type { Role } from '@/shared/rules/roles';
-import { clearancePermission, mayExtend, mayReassignInAbsence, type TagLike } from '@/shared/rules/tags';
+import type { TagLike } from '@/shared/rules/tags';
 
 /**
  * Who may do what, in one place. The server's `requirePermission` middleware and `ensurePermission`,
@@ -26,6 +26,8 @@ export const ROLE_PERMISSIONS = {
   recordReadings: ['admin', 'supervisor', 'engineer'],
   /** Raise an isolation or override tag. */
   raiseTag: ['admin', 'supervisor', 'engineer'],
+  /** Hold a tag: be offered one, take one over, or be named its new holder in the holder's absence. */
+  holdTags: ['admin', 'supervisor', 'engineer'],
   /** Add notes and photos to a live tag. */
   annotateTag: ['admin', 'supervisor', 'engineer'],
   /** Oversee tags everywhere: clear in the holder's absence, extend others' tags, the longer expiry limit. */
@@ -76,15 +78,35 @@ export const permissionsOf = (role: Role): RolePermission[] => ROLE_PERMISSION_N
 
 type TagSubject = Pick<TagLike, 'holderId' | 'status'>;
 
+/**
+ * Who may clear: only the person who holds the tag (OSHA 29 CFR 1910.147(e)(3)); a supervisor may clear someone
+ * else's tag only through the removal-in-absence procedure (the exception in 1910.147(e)(3)(i)–(iii)).
+ */
+export function clearancePermission(actor: Actor, tag: TagSubject): 'own' | 'in-absence' | 'none' {
+  if (tag.status !== 'live' || !may(actor, 'holdTags')) return 'none';
+  if (actor.id === tag.holderId) return 'own';
+  return may(actor, 'superviseTags') ? 'in-absence' : 'none';
+}
+
+/** Extend: the holder, or a supervisor. */
+export function mayExtend(actor: Actor, tag: TagSubject): boolean {
+  return tag.status === 'live' && (actor.id === tag.holderId || may(actor, 'superviseTags'));
+}
+
+/** Reassignment in absence: a supervisor or admin moves someone else's live tag through the absence procedure. */
+export function mayReassignInAbsence(actor: Actor, tag: TagSubject): boolean {
+  return tag.status === 'live' && may(actor, 'superviseTags') && actor.id !== tag.holderId;
+}
+
 /** Checks that depend on the record as well as the role. */
 export const RECORD_PERMISSIONS = {
   /** Edit a plant room or item: anyone who may edit any record, or the engineer who added it. */
   editRecord: (actor: Actor, record: { createdBy: number | null | undefined }) =>
     may(actor, 'editAnyRecord') || (may(actor, 'addToRegister') && record.createdBy != null && record.createdBy === actor.id),
-  /** Clear a tag: its holder; a supervisor through clearance in absence (shared/rules/tags.ts). */
+  /** Clear a tag: its holder; a supervisor through clearance in absence (clearancePermission above). */
   clearTag: (actor: Actor, tag: TagSubject) => clearancePermission(actor, tag) !== 'none',
   extendTag: (actor: Actor, tag: TagSubject) => mayExtend(actor, tag),
-  /** Move an absent holder's tag to a colleague: a supervisor's absence procedure (shared/rules/tags.ts). A hand-over between two people present is offer and acceptance (shared/rules/tag-handover.ts). */
+  /** Move an absent holder's tag to a colleague: a supervisor's absence procedure (mayReassignInAbsence above). A hand-over between two people present is offer and acceptance (shared/rules/tag-handover.ts). */
   reassignTagInAbsence: (actor: Actor, tag: TagSubject) => mayReassignInAbsence(actor, tag),
   /** Replace an item's label: only someone who may edit the item, as a new code kills the printed one. */
   replaceItemLabel: (actor: Actor, record: { createdBy: number | null | undefined }) => may(actor, 'replaceLabel') && RECORD_PERMISSIONS.editRecord(actor, record),

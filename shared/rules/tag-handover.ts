@@ -1,4 +1,5 @@
-import type { Actor, TagLike } from '@/shared/rules/tags';
+import { may, type Actor } from '@/shared/rules/permissions';
+import type { TagLike } from '@/shared/rules/tags';
 
 /**
  * An unanswered hand-over offer lapses after this many minutes. The two people are meant to be together at the
@@ -29,7 +30,7 @@ export function offerLapsesAt(now: Date): Date {
  * (may accept), or nobody (403 naming the holder).
  */
 export function handoverRole(actor: Actor, tag: Pick<TagLike, 'holderId' | 'status'> & HandoverOfferLike, now: Date): 'holder' | 'offered' | 'none' {
-  if (tag.status !== 'live' || actor.role === 'viewer') return 'none';
+  if (tag.status !== 'live' || !may(actor, 'holdTags')) return 'none';
   if (actor.id === tag.holderId) return 'holder';
   return offerIsOpen(tag, now) && tag.toUserId === actor.id ? 'offered' : 'none';
 }

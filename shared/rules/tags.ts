@@ -1,3 +1,4 @@
+import { may } from '@/shared/rules/permissions';
 import type { Role } from '@/shared/rules/roles';
 
 export const TAG_KINDS = ['isolation', 'override'] as const;
@@ -111,39 +112,9 @@ export function assetStateFromTags(tags: Pick<TagLike, 'kind' | 'status' | 'expi
   };
 }
 
-export interface Actor {
-  id: number;
-  role: Role;
-}
-
-const supervisory = (role: Role) => role === 'supervisor' || role === 'admin';
-
-/**
- * Who may clear: only the person who holds the tag (OSHA 29 CFR 1910.147(e)(3)); a supervisor may clear someone
- * else's tag only through the removal-in-absence procedure (the exception in 1910.147(e)(3)(i)–(iii)).
- */
-export function clearancePermission(actor: Actor, tag: Pick<TagLike, 'holderId' | 'status'>): 'own' | 'in-absence' | 'none' {
-  if (tag.status !== 'live' || actor.role === 'viewer') return 'none';
-  if (actor.id === tag.holderId) return 'own';
-  return supervisory(actor.role) ? 'in-absence' : 'none';
-}
-
-/** Extend: the holder, or a supervisor. */
-export function mayExtend(actor: Actor, tag: Pick<TagLike, 'holderId' | 'status'>): boolean {
-  return tag.status === 'live' && (actor.id === tag.holderId || supervisory(actor.role));
-}
-
-/** Reassignment in absence: a supervisor or admin moves someone else's live tag through the absence procedure. */
-export function mayReassignInAbsence(actor: Actor, tag: Pick<TagLike, 'holderId' | 'status'>): boolean {
-  return tag.status === 'live' && supervisory(actor.role) && actor.id !== tag.holderId;
-}
-
-export function mayRaise(actor: Actor): boolean {
-  return actor.role !== 'viewer';
-}
-
+/** The longer expiry limit goes with overseeing tags (`superviseTags` in shared/rules/permissions.ts). */
 export function maxExpiryDays(role: Role): number {
-  return supervisory(role) ? MAX_EXPIRY_DAYS_SUPERVISOR : MAX_EXPIRY_DAYS_ENGINEER;
+  return may({ role }, 'superviseTags') ? MAX_EXPIRY_DAYS_SUPERVISOR : MAX_EXPIRY_DAYS_ENGINEER;
 }
 
 /** Why an expiry is not acceptable, or null. Computed with the server's clock on the server. */

@@ -15,6 +15,17 @@ export interface TeamMember {
   siteIds: number[];
 }
 
+/** One line of the audit log (`GET /api/audit`), newest first. */
+export interface AuditEntry {
+  id: number;
+  type: string;
+  at: string;
+  userId: number | null;
+  actorId: number | null;
+  detail: Record<string, unknown> | null;
+  ip: string | null;
+}
+
 /** `GET /api/me/settings` and the answer to `PATCH /api/me/settings`. */
 export interface MySettings {
   email: string;

@@ -6,6 +6,7 @@ import { createOrganisation, setupTestApp, tokenFor, type OrgUsers, type TestApp
 import { as, assetBody, created, roomBody, siteBody } from '@/test/server/support/register';
 import { jpegWithGps } from '@/test/server/support/images';
 import { insertTag } from '@/test/server/support/tag-fixtures';
+import { apiRoutes } from '@/test/server/support/api-routes';
 
 /*
  * Walks every route the API has (read from the app's own router, so a new route is fuzzed without being listed here)
@@ -21,22 +22,6 @@ let u: OrgUsers;
 const tokens: Record<string, string> = {};
 const ids: Record<string, number | string> = {};
 let tables: string[] = [];
-
-interface Route { method: 'get' | 'post' | 'put' | 'patch' | 'delete'; path: string }
-
-/** Every route of the app, from Express's router: /api + each sub-router's route paths. */
-function apiRoutes(app: TestApp['app']): Route[] {
-  const found: Route[] = [];
-  type Layer = { route?: { path: string; methods: Record<string, boolean> }; handle?: { stack?: Layer[] } };
-  const walk = (stack: Layer[]) => {
-    for (const layer of stack) {
-      if (layer.route) for (const m of Object.keys(layer.route.methods)) found.push({ method: m as Route['method'], path: `/api${layer.route.path}` });
-      else if (layer.handle?.stack) walk(layer.handle.stack);
-    }
-  };
-  walk((app as unknown as { router: { stack: Layer[] } }).router.stack);
-  return found.filter((r) => r.path.startsWith('/api/'));
-}
 
 // Values that are wrong for almost every field: wrong types, absurd numbers, long and odd strings.
 const badScalar = fc.oneof(

@@ -118,6 +118,33 @@ describe('tag e-mails over SMTP', () => {
     expect((await env.inbox.all()).map((m) => m.to[0].address)).toEqual([u.engineer.email]);
   });
 
+  it('tells both people when a supervisor reassigns a tag in the holder’s absence, whatever their settings', async () => {
+    const tag = await raise();
+    await deliver();
+    await env.inbox.clear();
+    for (const who of ['engineer', 'engineer2']) {
+      await request(env.t.app).patch('/api/me/settings').set('Authorization', `Bearer ${tok[who]}`).send({ notifications: { myTags: false } });
+    }
+    const res = await post('supervisor', `/api/tags/${tag.id}/reassign-in-absence`, {
+      reason: 'Holder off sick, seal job continues', holderNotOnSite: true, contactAttempts: 'Phoned at 09:10 and 09:25, texted, no answer', toUserId: u.engineer2.id, lockNumber: 'RW-77',
+    });
+    expect(res.status).toBe(200);
+    await deliver();
+    // OSHA 29 CFR 1910.147(e)(3)(iii): the person whose lock was removed is told before resuming work.
+    expect(await subjectsFor(u.engineer.email)).toEqual(['Your isolation on P-01 Heating pump 1 (Rowan Library) was reassigned in your absence']);
+    const [toTaker] = await env.inbox.to(u.engineer2.email);
+    expect(toTaker.subject).toBe('You now hold the isolation on P-01 Heating pump 1 (Rowan Library)');
+    expect(toTaker.text).toContain('with lock RW-77');
+    expect(toTaker.text).toContain('Reason: Holder off sick, seal job continues');
+    expect(toTaker.text).toMatch(/CAUTION: Before anyone works on this item, check on site that your own lock is on every isolation point/);
+    expect(toTaker.text).toContain(`${TEST_PUBLIC_URL}/tags/${tag.id}`);
+    expect(await subjectsFor(u.supervisor.email)).toEqual([]);
+    for (const who of ['engineer', 'engineer2']) {
+      await request(env.t.app).patch('/api/me/settings').set('Authorization', `Bearer ${tok[who]}`).send({ notifications: { myTags: true } });
+    }
+    expect((await post('engineer', `/api/tags/${tag.id}/acknowledge`, {})).status).toBe(200);
+  });
+
   it('writes no mail for an action that fails', async () => {
     const before = (await outboxRows(env.t)).length;
     expect((await post('engineer', `/api/assets/${plant.pump.id}/tags`, { kind: 'isolation', reason: '', expiresAt: inHours(2) })).status).toBe(422);

@@ -1,7 +1,7 @@
 import { parse } from 'csv-parse/sync';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { REGISTER_COLUMNS } from '@/server/lib/register-csv';
-import { READING_EXPORT_COLUMNS } from '@/server/services/readings-export';
+import { READING_EXPORT_COLUMNS } from '@/server/services/readings.export';
 
 // The export adds the latest readings after the register columns; imports skip them.
 const EXPORT_COLUMNS = [...REGISTER_COLUMNS, ...READING_EXPORT_COLUMNS.map((c) => c.header)];

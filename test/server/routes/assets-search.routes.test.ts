@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildAssetListSql } from '@/server/services/asset-search';
+import { buildAssetListSql } from '@/server/services/assets.query';
 import { assetListQuery } from '@/shared/schemas/queries';
 import { generateLabelCode } from '@/shared/rules/label-code';
 import { createOrganisation, setupTestApp, tokenFor, type TestApp } from '@/test/setup/app';

@@ -1,14 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import {
-  assetStateFromTags,
-  clearancePermission,
-  clearanceReasonProblem,
-  expiryProblem,
-  isDueSoon,
-  isOverdue,
-  mayExtend,
-  mayReassignInAbsence,
-} from '@/shared/rules/tags';
+import { clearancePermission, mayExtend, mayReassignInAbsence } from '@/shared/rules/permissions';
+import { assetStateFromTags, clearanceReasonProblem, expiryProblem, isDueSoon, isOverdue } from '@/shared/rules/tags';
 import { HANDOVER_OFFER_MINUTES, handoverRole, offerLapsesAt } from '@/shared/rules/tag-handover';
 import { sourcesNotAccounted } from '@/shared/rules/tag-isolation';
 import { clearInAbsenceSchema, clearTagSchema, raiseTagSchema } from '@/shared/schemas/tags';

@@ -20,6 +20,7 @@ import { usePermissions } from '@/hooks/auth/use-permissions';
 import { useSinceLastVisitQuery } from '@/hooks/api/use-visits';
 import { LiveTagsPanel } from '@/components/places/live-tags-panel';
 import { SinceLastVisitCard } from '@/components/places/since-last-visit-card';
+import { ProcedureReviewCard } from '@/components/places/procedure-review-card';
 import { zoneIfDifferent } from '@/components/places/zone';
 import { useNow } from '@/components/tags/use-now';
 import { SiteVisitsCard } from '@/components/visits/site-visits-card';
@@ -60,6 +61,7 @@ export default function SiteScreen() {
           </View>
           <SiteReadingFlags siteId={id} />
           <SiteVisitsCard siteId={id} now={now} />
+          <ProcedureReviewCard siteId={id} />
           {s.assetCount ? (
             <Card>
               <Text variant="title">QR labels for this site</Text>

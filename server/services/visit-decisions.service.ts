@@ -1,3 +1,4 @@
+/** The end of a visit: each live tag the person holds on the site needs a decision (clear, extend, hand over, leave with a note), checked and carried out here. */
 import type { Sequelize } from 'sequelize';
 import { clock } from '@/server/lib/clock';
 import { HttpError } from '@/server/lib/http-error';

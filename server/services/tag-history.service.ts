@@ -1,8 +1,25 @@
+/** A tag's history (append-only): appending and reading events, and replaying an action by the Idempotency-Key stored on its event. */
 import { createHash } from 'node:crypto';
-import { UniqueConstraintError } from 'sequelize';
+import { UniqueConstraintError, type Transaction } from 'sequelize';
+import { clock } from '@/server/lib/clock';
 import { HttpError } from '@/server/lib/http-error';
 import type { AuthUser } from '@/server/middleware/auth';
+import type { Tag } from '@/server/models/tag.model';
 import { TagEvent } from '@/server/models/tag-event.model';
+import { User } from '@/server/models/user.model';
+import type { TagEventType } from '@/shared/rules/tags';
+
+/** Appends to a tag's history (append-only in the database); the event carries the action's Idempotency-Key. */
+export async function appendEvent(tag: Tag, type: TagEventType, actor: AuthUser, data: Record<string, unknown>, transaction: Transaction, idem: Idempotency | null = null) {
+  await TagEvent.create(
+    { tagId: tag.id, organisationId: tag.organisationId, type, at: clock.now(), byId: actor.id, data, idempotencyKey: idem?.key ?? null, requestHash: idem?.hash ?? null },
+    { transaction },
+  );
+}
+
+export async function loadEvents(tagId: number, transaction?: Transaction) {
+  return TagEvent.findAll({ where: { tagId }, include: [{ model: User, as: 'by' }], order: [['id', 'ASC']], transaction });
+}
 
 /** An action's Idempotency-Key and a fingerprint of what it asked for (action, target and body). */
 export interface Idempotency {

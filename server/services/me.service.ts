@@ -1,11 +1,21 @@
+/** The signed-in person's own account: who they are, their contact phone and the e-mails they receive. */
 import type { Sequelize } from 'sequelize';
-import { notFound } from '@/server/lib/http-error';
+import { HttpError, notFound } from '@/server/lib/http-error';
 import type { AuthUser } from '@/server/middleware/auth';
 import { NotificationSetting } from '@/server/models/notification-setting.model';
+import { Organisation } from '@/server/models/organisation.model';
 import { User } from '@/server/models/user.model';
+import { toUserDto } from '@/server/services/auth.service';
 import { NOTIFICATION_KEYS, notificationsForRole, type NotificationKey } from '@/shared/rules/notifications';
 import type { MySettingsInput } from '@/shared/schemas/team';
 import type { MySettings } from '@/shared/types/team';
+import type { User as UserDto } from '@/shared/types/user';
+
+export async function getMe(userId: number): Promise<UserDto> {
+  const user = await User.findByPk(userId, { include: [{ model: Organisation, as: 'organisation' }] });
+  if (!user) throw new HttpError(401, 'unauthenticated', 'Please sign in.');
+  return toUserDto(user, user.organisation!);
+}
 
 function toSettings(user: User, row: NotificationSetting | null): MySettings {
   const available = notificationsForRole(user.role);

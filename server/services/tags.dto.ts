@@ -1,4 +1,4 @@
-import { Op, type Transaction } from 'sequelize';
+/** A tag in the API's shape (`Tag` of shared/types/tags.ts), and the one query include that shape needs. */
 import { clock } from '@/server/lib/clock';
 import { Asset } from '@/server/models/asset.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
@@ -8,11 +8,11 @@ import { TagEvent } from '@/server/models/tag-event.model';
 import { TagPoint } from '@/server/models/tag-point.model';
 import { TagProof } from '@/server/models/tag-proof.model';
 import { User } from '@/server/models/user.model';
-import { assetStateFromTags, isDueSoon, isOverdue, type AssetTagSummary } from '@/shared/rules/tags';
+import { isDueSoon, isOverdue } from '@/shared/rules/tags';
 import { offerIsOpen } from '@/shared/rules/tag-handover';
-import type { PointUse, Tag as TagDto, TagEvent as TagEventDto } from '@/shared/types/tags';
+import type { Tag as TagDto, TagEvent as TagEventDto } from '@/shared/types/tags';
 
-const person = (u: User | null | undefined) => (u ? { id: u.id, name: u.name } : { id: 0, name: 'Unknown' });
+export const person = (u: User | null | undefined) => (u ? { id: u.id, name: u.name } : { id: 0, name: 'Unknown' });
 
 /** Everything a tag answer needs, in one query. */
 export const tagInclude = [
@@ -80,36 +80,4 @@ export function toTagDto(tag: Tag, events?: TagEvent[]): TagDto {
 
 export function toEventDto(e: TagEvent): TagEventDto {
   return { id: Number(e.id), type: e.type, at: e.at.toISOString(), by: person(e.by), data: e.data };
-}
-
-export async function loadEvents(tagId: number, transaction?: Transaction) {
-  return TagEvent.findAll({ where: { tagId }, include: [{ model: User, as: 'by' }], order: [['id', 'ASC']], transaction });
-}
-
-/** State per item for lists and records: one grouped query over live tags. */
-export async function tagSummaries(organisationId: number, assetIds: number[]): Promise<Map<number, AssetTagSummary>> {
-  const result = new Map<number, AssetTagSummary>();
-  if (!assetIds.length) return result;
-  const live = await Tag.findAll({
-    attributes: ['id', 'assetId', 'kind', 'status', 'expiresAt'],
-    where: { organisationId, status: 'live', assetId: { [Op.in]: assetIds } },
-    include: [{ model: TagProof, as: 'proofs', attributes: ['id'] }],
-  });
-  const now = clock.now();
-  const states = live.map((t) => ({ assetId: t.assetId, kind: t.kind, status: t.status, expiresAt: t.expiresAt, proved: provedOf(t) ?? true }));
-  for (const id of assetIds) result.set(id, assetStateFromTags(states.filter((t) => t.assetId === id), now));
-  return result;
-}
-
-/** Where an item is itself an isolation point of a live tag on another item ("locked shut for work on …"). */
-export async function pointUses(organisationId: number, assetId: number): Promise<PointUse[]> {
-  const points = await TagPoint.findAll({
-    where: { assetId },
-    include: [{ model: Tag, as: 'tag', where: { organisationId, status: 'live' }, include: [{ model: Asset, as: 'asset' }, { model: User, as: 'holder' }] }],
-    order: [['id', 'ASC']],
-  });
-  return points.map((p) => {
-    const tag = (p as TagPoint & { tag: Tag & { asset: Asset } }).tag;
-    return { tagId: tag.id, method: p.method, lockNumber: p.lockNumber || tag.lockNumber, forAsset: { id: tag.asset.id, plantId: tag.asset.plantId, name: tag.asset.name }, holder: person(tag.holder) };
-  });
 }

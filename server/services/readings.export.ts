@@ -3,7 +3,7 @@ import { literal } from 'sequelize';
 import { Asset } from '@/server/models/asset.model';
 import { Reading } from '@/server/models/reading.model';
 import { User } from '@/server/models/user.model';
-import { readingValues } from '@/server/services/readings-dto';
+import { readingValues } from '@/server/services/readings.dto';
 import { formatNumber, m3PerSToLitresPerSecond, paToBar } from '@/shared/calc';
 import type { LatestReadingExport } from '@/shared/types/readings';
 
