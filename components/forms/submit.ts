@@ -47,7 +47,7 @@ export function failureStatus(err: unknown): FormStatus {
 type Helpers<T> = Pick<FormikHelpers<T>, 'setErrors' | 'setStatus'>;
 
 /** A failure into the form: field messages beside their fields, everything in the status banner. */
-export function applyFailure<T>(err: unknown, { setErrors, setStatus }: Helpers<T>, pathFor?: FieldPathMap) {
+function applyFailure<T>(err: unknown, { setErrors, setStatus }: Helpers<T>, pathFor?: FieldPathMap) {
   if (err instanceof RequestError && err.fields) setErrors(nestErrors<T>(err.fields, pathFor));
   setStatus(failureStatus(err));
 }

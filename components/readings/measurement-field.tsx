@@ -25,7 +25,7 @@ interface Props {
 }
 
 /** A number with its unit: the unit is a choice beside the box when more than one is offered. */
-export function MeasurementField({ label, value, onChangeText, onBlur, unit, units, onUnitChange, hint, error, placeholder, testID }: Props) {
+function MeasurementField({ label, value, onChangeText, onBlur, unit, units, onUnitChange, hint, error, placeholder, testID }: Props) {
   const single = units.length <= 1;
   return (
     <FieldFrame label={label} hint={hint} error={error} labelID={testID ? `${testID}-label` : undefined}>

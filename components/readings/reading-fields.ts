@@ -8,7 +8,7 @@ import { READING_CHOICE_KEYS, READING_NUMBER_KEYS, type ReadingChoiceKey, type R
 import { validateFields } from '@/shared/schemas/field-errors';
 import type { ReadingValues } from '@/shared/types/readings';
 
-export interface MeasurementDef<K extends string = string> {
+interface MeasurementDef<K extends string = string> {
   key: K;
   label: string;
   quantity: PhysicalQuantity;
@@ -44,7 +44,7 @@ export const READING_FIELD_DEFS: Record<ReadingNumberKey, MeasurementDef<Reading
 };
 
 /** Every numeric field, in the order of the API keys. */
-export const READING_FIELDS: MeasurementDef<ReadingNumberKey>[] = READING_NUMBER_KEYS.map((k) => READING_FIELD_DEFS[k]);
+const READING_FIELDS: MeasurementDef<ReadingNumberKey>[] = READING_NUMBER_KEYS.map((k) => READING_FIELD_DEFS[k]);
 
 export const CHOICE_FIELD_DEFS: Record<ReadingChoiceKey, { label: string; options: Record<string, string> }> = {
   inhibitorResult: { label: 'Inhibitor (test kit)', options: INHIBITOR_LABELS },
@@ -53,10 +53,10 @@ export const CHOICE_FIELD_DEFS: Record<ReadingChoiceKey, { label: string; option
 
 export const isChoiceKey = (key: string): key is ReadingChoiceKey => (READING_CHOICE_KEYS as readonly string[]).includes(key);
 
-export type UnitChoice = Record<string, string>;
+type UnitChoice = Record<string, string>;
 
 export const defaultUnit = (quantity: PhysicalQuantity): string => UNIT_OPTIONS[quantity][0].key;
-export const unitLabel = (quantity: PhysicalQuantity, unit: string): string =>
+const unitLabel = (quantity: PhysicalQuantity, unit: string): string =>
   (UNIT_OPTIONS[quantity] as readonly { key: string; label: string }[]).find((u) => u.key === unit)?.label ?? unit;
 
 /** Reads a typed number; a decimal comma is accepted. Empty → null; not a number → NaN. */

@@ -9,10 +9,10 @@ import { expiryPhrase, formatInZone, localFields, parseLocal, quickExpiry, zoneN
 import { maxExpiryDays } from '@/shared/rules/tags';
 import type { Role } from '@/shared/rules/roles';
 
-export type ExpiryChoice = QuickExpiry | 'custom';
+type ExpiryChoice = QuickExpiry | 'custom';
 
 /** A value the shared schema reads as "not a valid date", so the form says so in its own words. */
-export const UNREADABLE_EXPIRY = 'unreadable';
+const UNREADABLE_EXPIRY = 'unreadable';
 
 const QUICK: { key: QuickExpiry; label: string }[] = [
   { key: 'end-today', label: 'End of today' },
@@ -39,7 +39,7 @@ function choiceOf(value: string, timeZone: string): ExpiryChoice {
 }
 
 /** Quick choices plus a precise date and time typed in site-local time; the result is shown in words with its zone. */
-export function ExpiryPicker({ value, onChange, timeZone, role, error, testID = 'expiry' }: Props) {
+function ExpiryPicker({ value, onChange, timeZone, role, error, testID = 'expiry' }: Props) {
   const [choice, setChoice] = useState<ExpiryChoice>(() => choiceOf(value, timeZone));
   const valid = value && !Number.isNaN(Date.parse(value)) ? new Date(value) : null;
   const [fields, setFields] = useState(() => (valid ? localFields(valid, timeZone) : { date: '', time: '' }));

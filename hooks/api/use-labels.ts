@@ -4,7 +4,7 @@ import { assetKeys } from '@/hooks/api/use-assets';
 import type { Asset } from '@/shared/types/register';
 import type { ListResponse } from '@/shared/types/user';
 
-export const labelKeys = {
+const labelKeys = {
   all: ['labels'] as const,
   code: (code: string) => [...labelKeys.all, code] as const,
   retired: (assetId: number) => [...labelKeys.all, 'retired', assetId] as const,
