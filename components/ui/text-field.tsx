@@ -38,6 +38,11 @@ export const TextField = forwardRef<TextInput, TextInputProps & FrameProps>(func
   );
 });
 
+/** A search box: no capitals or corrections, the keyboard's search key. */
+export function SearchField(props: TextInputProps & FrameProps) {
+  return <TextField autoCapitalize="none" autoCorrect={false} inputMode="search" returnKeyType="search" {...props} />;
+}
+
 const styles = StyleSheet.create({
   wrap: { gap: space.xs, marginBottom: space.md },
   input: {
