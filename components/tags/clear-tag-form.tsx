@@ -37,7 +37,7 @@ export function ClearTagForm({ tag, onDone, onCancel }: { tag: Tag; onDone: () =
               Follow the site’s procedure for restoring energy. Clearing this record does not restore anything by itself.
             </Notice>
           ) : (
-            <Notice tone="info" word="Before you clear">Put the item back to its normal state first: {tag.normalState}.</Notice>
+            <Notice tone="info" word="Before you clear">{`Put the item back to its normal state first: ${tag.normalState}.`}</Notice>
           )}
           <FormReasonField name="reason" label="Reason for clearing" hint="What was done, and why the tag can come off." min={MIN_CLEARANCE_REASON} testID="clear-reason" />
           {isolation ? <ReleaseChecks /> : null}
