@@ -8,7 +8,7 @@ import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { webStatic } from '@/server/lib/web-static';
 import { precompress } from '@/scripts/lib/precompress';
-import { CHROMIUM, CHROMIUM_ARGS } from '@/test/e2e/support/browser';
+import { CHROMIUM, CHROMIUM_ARGS } from '@/test/e2e/support/chromium';
 
 const ROOT = path.resolve(__dirname, '../..');
 const BLANK = path.join(ROOT, '.bench', 'blank-app');

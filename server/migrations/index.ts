@@ -11,6 +11,7 @@ import { visitReadings } from './0009-visit-readings';
 import { connections } from './0010-connections';
 import { visits } from './0011-visits';
 import { readingIdempotency } from './0014-reading-idempotency';
+import { boardIndexes } from './0016-board-indexes';
 import { photoIdempotency } from './0017-photo-idempotency';
 
 export interface Migration {
@@ -20,4 +21,4 @@ export interface Migration {
 }
 
 /** Every migration, in order. A new migration is a new file here, never an edit to an applied one. */
-export const migrations: Migration[] = [foundation, register, readings, tags, labels, notifications, tagPhotos, tagRules, visitReadings, connections, visits, readingIdempotency, photoIdempotency];
+export const migrations: Migration[] = [foundation, register, readings, tags, labels, notifications, tagPhotos, tagRules, visitReadings, connections, visits, readingIdempotency, boardIndexes, photoIdempotency];

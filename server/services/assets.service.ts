@@ -1,12 +1,14 @@
 import { Op, QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import { pointUses, tagSummaries } from '@/server/services/live-tags.service';
-import { listTags } from '@/server/services/tags.service';
+import { provedOf, tagInclude, toTagDto } from '@/server/services/tags.dto';
+import { clock } from '@/server/lib/clock';
 import { HttpError, conflict, notFound } from '@/server/lib/http-error';
 import { insertWithLabelCode, isUniqueClash } from '@/server/lib/unique-clash';
 import type { AuthUser } from '@/server/middleware/auth';
 import { Asset } from '@/server/models/asset.model';
 import { PlantRoom } from '@/server/models/plant-room.model';
 import { Site } from '@/server/models/site.model';
+import { Tag } from '@/server/models/tag.model';
 import { User } from '@/server/models/user.model';
 import { assertMayChangeSite } from '@/server/services/connections.service';
 import { buildAssetListSql, type AssetListFilters } from '@/server/services/assets.query';
@@ -15,12 +17,16 @@ import { firstAssetPhotoIds, photosOf } from '@/server/services/photos.service';
 import { assertCanEdit, plantRoomForField, siteForField } from '@/server/services/register.lookup';
 import { toAssetDto } from '@/server/services/register.dto';
 import type { Asset as AssetDto } from '@/shared/types/register';
+import { assetStateFromTags } from '@/shared/rules/tags';
 import type { ListResponse } from '@/shared/types/api';
 import { siteWhere, visibleSiteIds } from '@/server/services/site-access.service';
 
 type Paging = { page: number; pageSize: number; offset: number };
 
 export const SITE_PLANT_ID_INDEX = 'assets_site_plant_id_unique';
+
+/** An item's record lists at most this many live tags (its state counts them all). */
+const RECORD_LIVE_TAGS = 200;
 
 const include = [
   { model: Site, as: 'site', attributes: ['id', 'name', 'timeZone'] },
@@ -65,11 +71,38 @@ async function findAsset(actor: AuthUser, id: number, transaction?: Transaction)
   return asset;
 }
 
+/** How many photos each live tag of an item has, counted in the database (the record shows counts, not photos). */
+async function liveTagPhotoCounts(organisationId: number, assetId: number): Promise<Map<number, number>> {
+  const rows = await Asset.sequelize!.query<{ tagId: number; photos: number | bigint }>(
+    `SELECT p.tag_id AS tagId, COUNT(*) AS photos FROM tags t JOIN photos p ON p.tag_id = t.id
+     WHERE t.organisation_id = ? AND t.asset_id = ? AND t.status = 'live' GROUP BY p.tag_id`,
+    { replacements: [organisationId, assetId], type: QueryTypes.SELECT },
+  );
+  return new Map(rows.map((r) => [Number(r.tagId), Number(r.photos)]));
+}
+
+/**
+ * The item's record in one round of reads side by side, each read once: the item (scoped like every read), its
+ * photos, its live tags (which also give the item's state), their photo counts and where the item is itself an
+ * isolation point.
+ */
 export async function getAsset(actor: AuthUser, id: number): Promise<AssetDto> {
-  await findAsset(actor, id);
-  const [dto] = await loadAssetDtos([id], { photos: true });
-  const [live, uses] = await Promise.all([listTags(actor, { assetId: id, status: 'live' }, { page: 1, pageSize: 200, offset: 0 }), pointUses(actor.organisationId, id)]);
-  return { ...dto, liveTags: live.items, pointUses: uses };
+  const [asset, photos, live, tagPhotos, uses] = await Promise.all([
+    Asset.findOne({ where: { id, organisationId: actor.organisationId, ...siteWhere(actor) }, include }),
+    photosOf('assetId', [id]),
+    Tag.findAll({ where: { organisationId: actor.organisationId, assetId: id, status: 'live' }, include: tagInclude, order: [['raisedAt', 'DESC'], ['id', 'DESC']] }),
+    liveTagPhotoCounts(actor.organisationId, id),
+    pointUses(actor.organisationId, id),
+  ]);
+  if (!asset) throw notFound('Plant item');
+  const states = live.map((t) => ({ kind: t.kind, status: t.status, expiresAt: t.expiresAt, proved: provedOf(t) ?? true }));
+  const assetPhotos = photos.get(id) ?? [];
+  return {
+    ...toAssetDto(asset, { photos: assetPhotos, thumbnailPhotoId: assetPhotos[0]?.id ?? null }),
+    ...assetStateFromTags(states, clock.now()),
+    liveTags: live.slice(0, RECORD_LIVE_TAGS).map((t) => ({ ...toTagDto(t), photoCount: tagPhotos.get(t.id) ?? 0 })),
+    pointUses: uses,
+  };
 }
 
 /** Checks the site, the plant room (on that site) and that the plant ID is free there. */

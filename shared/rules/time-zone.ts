@@ -1,11 +1,23 @@
 /** Time-zone arithmetic with the platform's Intl (IANA database); no library needed for these two questions. */
 
+// One formatter per zone: building one costs far more than using it, and lists and the board ask per row or site.
+const formatters = new Map<string, Intl.DateTimeFormat>();
+
+function formatterFor(timeZone: string): Intl.DateTimeFormat {
+  let fmt = formatters.get(timeZone);
+  if (!fmt) {
+    fmt = new Intl.DateTimeFormat('en-GB', {
+      timeZone,
+      hourCycle: 'h23',
+      year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit',
+    });
+    formatters.set(timeZone, fmt);
+  }
+  return fmt;
+}
+
 function partsInZone(instant: Date, timeZone: string) {
-  const fmt = new Intl.DateTimeFormat('en-GB', {
-    timeZone,
-    hourCycle: 'h23',
-    year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit',
-  });
+  const fmt = formatterFor(timeZone);
   const p = Object.fromEntries(fmt.formatToParts(instant).map((x) => [x.type, x.value]));
   return { year: Number(p.year), month: Number(p.month), day: Number(p.day), hour: Number(p.hour), minute: Number(p.minute), second: Number(p.second) };
 }

@@ -2,21 +2,9 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { expect } from 'vitest';
+import { CHROMIUM, CHROMIUM_ARGS } from '@/test/e2e/support/chromium';
 
-export const CHROMIUM = '/usr/bin/chromium';
-
-// Chromium's own background calls would otherwise try the network, which this product never needs.
-export const CHROMIUM_ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--host-resolver-rules=MAP * ~NOTFOUND, EXCLUDE 127.0.0.1',
-];
+export { CHROMIUM, CHROMIUM_ARGS };
 
 export const PHONE = { width: 390, height: 844 };
 export const DESKTOP = { width: 1440, height: 900 };
