@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { PHONE, launch, openPage, screenshot, signIn, testIdText, type Session } from '@/test/e2e/support/browser';
+import { PHONE, launch, openSignedIn, screenshot, testIdText, type Session } from '@/test/e2e/support/browser';
 import { api, apiToken } from '@/test/e2e/support/api';
 import type { Asset } from '@/shared/types/register';
 import type { Tag } from '@/shared/types/tags';
@@ -44,12 +44,16 @@ afterAll(async () => {
   await session.close();
 });
 
+/** The holder's phone, on the tag's page. */
+async function openTagAsHolder() {
+  const watched = await openSignedIn(session.browser, baseUrl, PHONE, 'engineer2@example.test', 'engineer');
+  await watched.page.goto(`${baseUrl}/tags/${tag.id}`);
+  return watched;
+}
+
 describe('tag action forms on the form kit, on a phone', () => {
   it('shows the shared schema’s messages beside the fields before anything is sent', async () => {
-    const { page, context } = await openPage(session.browser, PHONE);
-    await signIn(page, baseUrl, 'engineer2@example.test');
-    await page.getByTestId('home-engineer').waitFor();
-    await page.goto(`${baseUrl}/tags/${tag.id}`);
+    const { page, context } = await openTagAsHolder();
     await page.getByTestId('tag-action-clear').click();
     await page.getByTestId('clear-tag-form').waitFor();
     await page.getByTestId('clear-reason').fill('Done');
@@ -63,10 +67,7 @@ describe('tag action forms on the form kit, on a phone', () => {
   });
 
   it('puts a server refusal in the banner and its field message beside the field, then sends once it is put right', async () => {
-    const { page, context } = await openPage(session.browser, PHONE);
-    await signIn(page, baseUrl, 'engineer2@example.test');
-    await page.getByTestId('home-engineer').waitFor();
-    await page.goto(`${baseUrl}/tags/${tag.id}`);
+    const { page, context } = await openTagAsHolder();
     await page.getByTestId('tag-action-offer').click();
     await page.getByTestId('handover-offer-form').waitFor();
     await page.getByTestId('handover-to').click();
