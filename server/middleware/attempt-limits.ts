@@ -3,7 +3,7 @@ import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { ServerConfig } from '@/server/config';
 
 export const addressKey = (req: Request) => ipKeyGenerator(req.ip ?? '');
-export const accountKey = (req: Request) => String(req.body?.email ?? '').trim().toLowerCase().slice(0, 254);
+const accountKey = (req: Request) => String(req.body?.email ?? '').trim().toLowerCase().slice(0, 254);
 
 interface LimitOptions {
   /** Multiplies the configured allowance. */

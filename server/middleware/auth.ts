@@ -22,7 +22,7 @@ declare module 'express-serve-static-core' {
   }
 }
 
-export interface TokenClaims {
+interface TokenClaims {
   sub: string;
   org: number;
   ver: number;

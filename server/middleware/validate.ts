@@ -4,7 +4,7 @@ import { HttpError } from '@/server/lib/http-error';
 import { parseId as parseIdOrNull } from '@/shared/rules/ids';
 import { fieldErrors } from '@/shared/schemas/field-errors';
 
-export interface RequestSchemas {
+interface RequestSchemas {
   params?: AnySchema;
   query?: AnySchema;
   body?: AnySchema;

@@ -13,7 +13,7 @@ const FT_MIN_WORD = 3;
 const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 /** Types whose key or label has a word starting with every word typed ("fan" → terminal unit, "calor" → water heater). */
-export function typesMatching(q: string): AssetType[] {
+function typesMatching(q: string): AssetType[] {
   const words = q.toLowerCase().split(/[^\p{L}\p{N}]+/u).filter(Boolean);
   if (q.length < 3 || !words.length) return [];
   return ASSET_TYPES.filter((t) => {

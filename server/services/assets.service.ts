@@ -20,8 +20,8 @@ import type { Asset as AssetDto } from '@/shared/types/register';
 import { assetStateFromTags } from '@/shared/rules/tags';
 import type { ListResponse } from '@/shared/types/api';
 import { siteWhere, visibleSiteIds } from '@/server/services/site-access.service';
+import type { Paging } from '@/shared/rules/paging';
 
-type Paging = { page: number; pageSize: number; offset: number };
 
 export const SITE_PLANT_ID_INDEX = 'assets_site_plant_id_unique';
 

@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import type { AuthUser } from '@/server/middleware/auth';
 import { AuditEvent, type AuditEventType } from '@/server/models/audit-event.model';
-import type { Paging } from '@/shared/rules/paging';
+import { listPage, pageRows, type Paging } from '@/shared/rules/paging';
 import type { ListResponse } from '@/shared/types/api';
 import type { AuditEntry } from '@/shared/types/team';
 
@@ -20,13 +20,8 @@ export async function listAudit(actor: AuthUser, paging: Paging): Promise<ListRe
   const { rows, count } = await AuditEvent.findAndCountAll({
     where: { organisationId: actor.organisationId },
     order: [['id', 'DESC']],
-    limit: paging.pageSize,
-    offset: paging.offset,
+    ...pageRows(paging),
   });
-  return {
-    items: rows.map((e) => ({ id: Number(e.id), type: e.type, at: e.createdAt.toISOString(), userId: e.userId, actorId: e.actorId, detail: e.detail ?? null, ip: e.ip })),
-    total: count,
-    page: paging.page,
-    pageSize: paging.pageSize,
-  };
+  const entries = rows.map((e) => ({ id: Number(e.id), type: e.type, at: e.createdAt.toISOString(), userId: e.userId, actorId: e.actorId, detail: e.detail ?? null, ip: e.ip }));
+  return listPage(entries, count, paging);
 }

@@ -22,7 +22,7 @@ import { siteWhere } from '@/server/services/site-access.service';
  *   medium   its key (heating-flow) or its label (Heating flow)
  * Headers match ignoring case and spaces. Rows are only ever added: an import never removes a link.
  */
-export const CONNECTION_COLUMNS = ['site', 'from', 'to', 'medium'] as const;
+const CONNECTION_COLUMNS = ['site', 'from', 'to', 'medium'] as const;
 const MAX_ROWS = 5000;
 const squash = (s: string) => s.trim().toLowerCase().replace(/[\s_-]+/g, '');
 const MEDIUM_LOOKUP = new Map<string, Medium>(MEDIA.flatMap((m) => [[squash(m), m], [squash(MEDIUM_LABELS[m]), m]] as [string, Medium][]));

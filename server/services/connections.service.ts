@@ -21,7 +21,7 @@ const include = [
 export const toItemRef = (a: Pick<Asset, 'id' | 'plantId' | 'name' | 'type' | 'plantRoomId'>): ItemRef =>
   ({ id: a.id, plantId: a.plantId, name: a.name, type: a.type, plantRoomId: a.plantRoomId });
 
-export function toConnectionDto(c: Connection): ConnectionDto {
+function toConnectionDto(c: Connection): ConnectionDto {
   return {
     id: c.id,
     medium: c.medium,

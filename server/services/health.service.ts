@@ -8,7 +8,7 @@ export interface LauncherStatus {
   lastExit: { at: string; code: number | null; signal: string | null } | null;
 }
 
-export interface Health {
+interface Health {
   ok: boolean;
   db: 'up' | 'down';
   /** Present when this server started its own mariadbd. */

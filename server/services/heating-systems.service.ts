@@ -12,7 +12,7 @@ import { expansionInputsFor, SYSTEM_FILL_AND_CURVE_KEYS, type RegisterContext } 
 import type { GasFamily } from '@/shared/calc';
 import type { HeatingSystemInput } from '@/shared/schemas/readings';
 import type { HeatingSystem, RegisterVessel, SystemExpansionCheck } from '@/shared/types/readings';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 const VALUE_KEYS = [
   'designDeltaTK',

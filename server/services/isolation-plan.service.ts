@@ -12,7 +12,7 @@ import { ENERGY_SOURCES, ENERGY_SOURCE_LABELS, type EnergySource } from '@/share
 import type { ClosingAffects, IsolationPlan, ItemRef, PlantRoomDiagram } from '@/shared/types/connections';
 
 /** Shown with every plan, on screen and in the API. */
-export const PLAN_CAUTION =
+const PLAN_CAUTION =
   'This plan is only as good as the register. Labels and flow arrows on site can be wrong and pipework may not be recorded: ' +
   'verify every point on site, follow the site’s isolation procedure, and prove the isolation before work starts.';
 
@@ -30,7 +30,7 @@ async function network(organisationId: number, siteId: number) {
 }
 
 /** `sources=gas,electrical`; none given = every energy source recorded on the item. */
-export function readPlanSources(raw: unknown, fallback: EnergySource[]): EnergySource[] {
+function readPlanSources(raw: unknown, fallback: EnergySource[]): EnergySource[] {
   if (raw === undefined || raw === '') return fallback;
   const list = String(raw).split(',').map((s) => s.trim()).filter(Boolean);
   const unknown = list.filter((s) => !(ENERGY_SOURCES as readonly string[]).includes(s));

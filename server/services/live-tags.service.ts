@@ -12,7 +12,7 @@ import { assetStateFromTags, type AssetTagSummary } from '@/shared/rules/tags';
 import { byAttention } from '@/shared/rules/visits';
 import type { PointUse, Tag as TagDto } from '@/shared/types/tags';
 
-export interface LiveTagScope {
+interface LiveTagScope {
   siteId?: number;
   plantRoomId?: number;
   holderId?: number;

@@ -12,9 +12,9 @@ import { recordOpened } from '@/server/services/recent-places.service';
 import type { PlantRoomInput } from '@/shared/schemas/register';
 import type { PlantRoom as PlantRoomDto, SafetyLocations } from '@/shared/types/register';
 import type { ListResponse } from '@/shared/types/api';
+import { listPage, pageRows, type Paging } from '@/shared/rules/paging';
 
-type Paging = { page: number; pageSize: number; offset: number };
-export type PlantRoomPatch = Partial<Omit<PlantRoomInput, 'siteId' | 'safety'>> & { safety?: Partial<SafetyLocations> };
+type PlantRoomPatch = Partial<Omit<PlantRoomInput, 'siteId' | 'safety'>> & { safety?: Partial<SafetyLocations> };
 
 const include = [
   { model: Site, as: 'site', attributes: ['id', 'name'] },
@@ -45,13 +45,12 @@ export async function listSitePlantRooms(actor: AuthUser, siteId: number, paging
     where: { siteId, organisationId: actor.organisationId },
     include,
     order: [['name', 'ASC'], ['id', 'ASC']],
-    limit: paging.pageSize,
-    offset: paging.offset,
+    ...pageRows(paging),
   });
-  return { items: await toDtos(rows), total: count, page: paging.page, pageSize: paging.pageSize };
+  return listPage(await toDtos(rows), count, paging);
 }
 
-export async function getPlantRoom(actor: AuthUser, id: number): Promise<PlantRoomDto> {
+async function getPlantRoom(actor: AuthUser, id: number): Promise<PlantRoomDto> {
   await findPlantRoom(actor, id);
   const room = await PlantRoom.findByPk(id, { include });
   return (await toDtos([room!]))[0];

@@ -15,12 +15,12 @@ import type { ReadingCorrectionInput, ReadingSetInput } from '@/shared/schemas/r
 import type { ReadingList, ReadingSet, ReadingValues } from '@/shared/types/readings';
 import type { CheckFlagLevel } from '@/shared/calc';
 import { siteWhere } from '@/server/services/site-access.service';
+import { listPage, pageRows, type Paging } from '@/shared/rules/paging';
 
-type Paging = { page: number; pageSize: number; offset: number };
 
 const RANK: Record<CheckFlagLevel, number> = { info: 0, caution: 1, danger: 2 };
 
-export const readingIncludes = (): Includeable[] => [
+const readingIncludes = (): Includeable[] => [
   { model: User, as: 'creator', attributes: ['id', 'name'] },
   { model: Reading, as: 'correction', attributes: ['id', 'createdAt', 'createdBy'], include: [{ model: User, as: 'creator', attributes: ['id', 'name'] }] },
 ];
@@ -64,12 +64,11 @@ export async function listReadings(actor: AuthUser, assetId: number, paging: Pag
     where: { assetId: asset.id },
     include: readingIncludes(),
     order: [['takenAt', 'DESC'], ['id', 'DESC']],
-    limit: paging.pageSize,
-    offset: paging.offset,
+    ...pageRows(paging),
     distinct: true,
   });
   const checkSettings = resolveCheckSettings(await registerContextFor(asset));
-  return { items: rows.map(toReadingSet), total: count, page: paging.page, pageSize: paging.pageSize, checkSettings };
+  return { ...listPage(rows.map(toReadingSet), count, paging), checkSettings };
 }
 
 /**

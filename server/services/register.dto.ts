@@ -11,8 +11,8 @@ import type { Asset as AssetDto, Photo as PhotoDto, PlantRoom as PlantRoomDto, S
 
 const person = (user: User | undefined, id: number) => ({ id, name: user?.name ?? '' });
 
-export const photoUrl = (id: number) => `/api/photos/${id}`;
-export const thumbnailUrl = (id: number) => `/api/photos/${id}/thumbnail`;
+const photoUrl = (id: number) => `/api/photos/${id}`;
+const thumbnailUrl = (id: number) => `/api/photos/${id}/thumbnail`;
 
 export function toPhotoDto(photo: Photo): PhotoDto {
   return {
@@ -68,7 +68,7 @@ export function toPlantRoomDto(room: PlantRoom, extra: { assetCount: number; liv
 }
 
 /** `now` decides overdue: the next service date is compared with today's date at the site. */
-export type AssetBaseDto = Omit<AssetDto, 'state' | 'overdue' | 'liveIsolations' | 'liveOverrides' | 'unprovedIsolations'>;
+type AssetBaseDto = Omit<AssetDto, 'state' | 'overdue' | 'liveIsolations' | 'liveOverrides' | 'unprovedIsolations'>;
 
 /** The register's view of an item; its tag state is added by the assets service. */
 export function toAssetDto(asset: Asset, extra: { photos?: Photo[]; thumbnailPhotoId: number | null; now?: Date }): AssetBaseDto {

@@ -41,13 +41,6 @@ export function siteWhere(actor: Pick<AuthUser, 'role' | 'siteIds'>, column = 's
   return ids === null ? {} : { [Op.and]: [{ [column]: { [Op.in]: ids.length ? ids : [0] } }] };
 }
 
-/** The same condition for raw SQL with positional `?` replacements: `AND <column> IN (?)`, or nothing. */
-export function siteSql(actor: Pick<AuthUser, 'role' | 'siteIds'>, column: string): { sql: string; values: unknown[] } {
-  const ids = visibleSiteIds(actor);
-  if (ids === null) return { sql: '', values: [] };
-  return ids.length ? { sql: ` AND ${column} IN (?)`, values: [ids] } : { sql: ' AND 1 = 0', values: [] };
-}
-
 /** Site ids per user, for lists of people. */
 export async function siteIdsByUser(userIds: number[], transaction?: Transaction): Promise<Map<number, number[]>> {
   const result = new Map<number, number[]>(userIds.map((id) => [id, []]));

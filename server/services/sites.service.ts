@@ -11,8 +11,8 @@ import { isValidTimeZone } from '@/shared/rules/time-zone';
 import type { Site as SiteDto } from '@/shared/types/register';
 import type { ListResponse } from '@/shared/types/api';
 import { siteWhere } from '@/server/services/site-access.service';
+import { listPage, pageRows, type Paging } from '@/shared/rules/paging';
 
-type Paging = { page: number; pageSize: number; offset: number };
 
 /** The zone as the IANA database spells it (`europe/london` → `Europe/London`), or a 422 naming the field. */
 function canonicalZone(timeZone: string): string {
@@ -48,11 +48,10 @@ export async function listSites(actor: AuthUser, paging: Paging): Promise<ListRe
   const { rows, count } = await Site.findAndCountAll({
     where: { organisationId: actor.organisationId, ...siteWhere(actor, 'id') },
     order: [['name', 'ASC'], ['id', 'ASC']],
-    limit: paging.pageSize,
-    offset: paging.offset,
+    ...pageRows(paging),
   });
   const counts = await countsFor(Site.sequelize!, rows.map((s) => s.id));
-  return { items: rows.map((s) => toSiteDto(s, counts.get(s.id)!)), total: count, page: paging.page, pageSize: paging.pageSize };
+  return listPage(rows.map((s) => toSiteDto(s, counts.get(s.id)!)), count, paging);
 }
 
 /** A site as its screen opens it: with its live tags, and remembered among the person's recent places. */

@@ -17,7 +17,7 @@ import type { ClearInAbsenceInput, ClearTagInput, ExtendTagInput, ProofInput } f
 import type { Tag as TagDto } from '@/shared/types/tags';
 
 /** Locks the tag row for the rest of the transaction; another organisation's tag is a 404. */
-export async function lockTag(actor: AuthUser, id: number, transaction: Transaction): Promise<Tag> {
+async function lockTag(actor: AuthUser, id: number, transaction: Transaction): Promise<Tag> {
   const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId }, transaction, lock: transaction.LOCK.UPDATE }) : null;
   if (!tag) throw notFound('Tag');
   return tag;
@@ -34,7 +34,7 @@ export async function actOnTag(sequelize: Sequelize, actor: AuthUser, id: number
   return getTag(actor, id);
 }
 
-export function requireLive(tag: Tag) {
+function requireLive(tag: Tag) {
   if (tag.status !== 'live') throw new HttpError(409, 'already-cleared', 'This tag has already been cleared.');
 }
 

@@ -78,6 +78,6 @@ export function toTagDto(tag: Tag, events?: TagEvent[]): TagDto {
   };
 }
 
-export function toEventDto(e: TagEvent): TagEventDto {
+function toEventDto(e: TagEvent): TagEventDto {
   return { id: Number(e.id), type: e.type, at: e.at.toISOString(), by: person(e.by), data: e.data };
 }

@@ -11,7 +11,7 @@ import { toPhotoDto } from '@/server/services/register.dto';
 import { seesSite, siteWhere } from '@/server/services/site-access.service';
 import { loadEvents } from '@/server/services/tag-history.service';
 import { tagInclude, toTagDto } from '@/server/services/tags.dto';
-import type { Paging } from '@/shared/rules/paging';
+import { listPage, pageRows, type Paging } from '@/shared/rules/paging';
 import { rolesWith } from '@/shared/rules/permissions';
 import type { ListResponse } from '@/shared/types/api';
 import type { Tag as TagDto } from '@/shared/types/tags';
@@ -23,7 +23,7 @@ export async function getTag(actor: AuthUser, id: number): Promise<TagDto> {
   return { ...toTagDto(tag, await loadEvents(tag.id)), photoCount: photos.length, photos: photos.map(toPhotoDto) };
 }
 
-export interface TagFilters {
+interface TagFilters {
   status?: string;
   /** Only live tags with an open hand-over offer to the caller. */
   offeredToMe?: boolean;
@@ -41,9 +41,9 @@ export async function listTags(actor: AuthUser, filters: TagFilters, paging: Pag
   const assetWhere = { ...(filters.siteId ? { siteId: filters.siteId } : {}), ...siteWhere(actor) };
   const narrowed = Reflect.ownKeys(assetWhere).length > 0;
   const include = tagInclude.map((inc) => (inc.as === 'asset' && narrowed ? { ...inc, where: assetWhere, required: true } : inc));
-  const { rows, count } = await Tag.findAndCountAll({ where, include, order: [['status', 'DESC'], ['raisedAt', 'DESC']], limit: paging.pageSize, offset: paging.offset, distinct: true });
+  const { rows, count } = await Tag.findAndCountAll({ where, include, order: [['status', 'DESC'], ['raisedAt', 'DESC']], ...pageRows(paging), distinct: true });
   const photos = await photosOf('tagId', rows.map((t) => t.id));
-  return { items: rows.map((t) => ({ ...toTagDto(t), photoCount: photos.get(t.id)?.length ?? 0 })), total: count, page: paging.page, pageSize: paging.pageSize };
+  return listPage(rows.map((t) => ({ ...toTagDto(t), photoCount: photos.get(t.id)?.length ?? 0 })), count, paging);
 }
 
 /** People a tag can be offered or reassigned to: active, signed-up members who may hold tags, of the caller's organisation. */

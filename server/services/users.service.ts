@@ -9,7 +9,7 @@ import { UserSiteAccess } from '@/server/models/user-site-access.model';
 import { recordAudit } from '@/server/services/audit.service';
 import { issuePasswordLink, withdrawPasswordLinks } from '@/server/services/auth.service';
 import { siteIdsByUser } from '@/server/services/site-access.service';
-import type { Paging } from '@/shared/rules/paging';
+import { listPage, pageRows, type Paging } from '@/shared/rules/paging';
 import { may, rolesWith } from '@/shared/rules/permissions';
 import type { ChangeUserInput, InviteUserInput, SiteAccessInput } from '@/shared/schemas/team';
 import type { ListResponse } from '@/shared/types/api';
@@ -34,10 +34,9 @@ export async function listUsers(actor: AuthUser, paging: Paging): Promise<ListRe
   const { rows, count } = await User.findAndCountAll({
     where: { organisationId: actor.organisationId },
     order: [['name', 'ASC']],
-    limit: paging.pageSize,
-    offset: paging.offset,
+    ...pageRows(paging),
   });
-  return { items: await teamMembers(rows), total: count, page: paging.page, pageSize: paging.pageSize };
+  return listPage(await teamMembers(rows), count, paging);
 }
 
 /** Another organisation's user is answered exactly like a missing one. */

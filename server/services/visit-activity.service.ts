@@ -7,7 +7,7 @@ import type { PhotoActivity, ReadingActivity, TagActivity, VisitActivity } from 
  * A visit collects nothing itself: what a person did at a site is read back from the records they made there
  * (tag history, readings, photos) by person, place and time window.
  */
-export interface ActivityWindow {
+interface ActivityWindow {
   organisationId: number;
   siteId: number;
   plantRoomId?: number;
@@ -70,7 +70,7 @@ export async function readingActivity(w: ActivityWindow, opts: { flaggedOnly?: b
 }
 
 /** Photos of items, plant rooms and tags on the site; the item or room is found through whichever the photo is of. */
-export async function photoActivity(w: ActivityWindow, transaction?: Transaction): Promise<PhotoActivity[]> {
+async function photoActivity(w: ActivityWindow, transaction?: Transaction): Promise<PhotoActivity[]> {
   const roomFilter = w.plantRoomId ? ' AND COALESCE(a.plant_room_id, pr.id) = :plantRoomId' : '';
   const rows = await db().query<{ id: number; at: Date; caption: string | null; plantId: string | null; assetName: string | null; roomName: string | null; tagId: number | null }>(
     `SELECT p.id, p.created_at AS at, p.caption, a.plant_id AS plantId, a.name AS assetName, pr.name AS roomName, p.tag_id AS tagId

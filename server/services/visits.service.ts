@@ -18,11 +18,11 @@ import { may } from '@/shared/rules/permissions';
 import type { VisitDecisionAction } from '@/shared/rules/visits';
 import type { Tag as TagDto } from '@/shared/types/tags';
 import type { EndVisitInput, StartVisitInput, VisitFiltersQuery } from '@/shared/schemas/visits';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 import type { Visit as VisitDto, VisitDecision as VisitDecisionDto } from '@/shared/types/visits';
+import { listPage, pageRows, type Paging } from '@/shared/rules/paging';
 
-type Paging = { page: number; pageSize: number; offset: number };
-export type VisitFilters = Pick<VisitFiltersQuery, 'userId' | 'from' | 'to' | 'open'>;
+type VisitFilters = Pick<VisitFiltersQuery, 'userId' | 'from' | 'to' | 'open'>;
 
 const include = [{ model: Site, as: 'site' }, { model: User, as: 'user', attributes: ['id', 'name'] }];
 
@@ -118,8 +118,8 @@ export async function listSiteVisits(actor: AuthUser, siteId: number, filters: V
   if (userId) Object.assign(where, { userId });
   if (filters.from || filters.to) Object.assign(where, { startedAt: { ...(filters.from ? { [Op.gte]: filters.from } : {}), ...(filters.to ? { [Op.lte]: filters.to } : {}) } });
   if (filters.open) Object.assign(where, { endedAt: filters.open === 'true' ? null : { [Op.ne]: null } });
-  const { rows, count } = await Visit.findAndCountAll({ where, include, order: [['startedAt', 'DESC'], ['id', 'DESC']], limit: paging.pageSize, offset: paging.offset });
-  return { items: rows.map(toVisitDto), total: count, page: paging.page, pageSize: paging.pageSize };
+  const { rows, count } = await Visit.findAndCountAll({ where, include, order: [['startedAt', 'DESC'], ['id', 'DESC']], ...pageRows(paging) });
+  return listPage(rows.map(toVisitDto), count, paging);
 }
 
 

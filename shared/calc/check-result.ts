@@ -66,15 +66,6 @@ export interface WorkingStep {
   source?: string;
 }
 
-const FLAG_RANK: Record<CheckFlagLevel, number> = { info: 0, caution: 1, danger: 2 };
-
-/** The more serious of two flags (danger over caution over info). */
-export function worstFlag(a: CheckFlag | undefined, b: CheckFlag | undefined): CheckFlag | undefined {
-  if (!a) return b;
-  if (!b) return a;
-  return FLAG_RANK[b.level] > FLAG_RANK[a.level] ? b : a;
-}
-
 /** Formats a number for a substituted formula: trims float noise, keeps enough digits. */
 export function formatNumber(value: number, significantDigits = 4): string {
   if (!Number.isFinite(value)) return String(value);

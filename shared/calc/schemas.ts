@@ -1,5 +1,5 @@
 // Validation shared by forms and the API, so both sides accept and refuse the same values.
-import { array, mixed, number, object, type InferType } from 'yup';
+import { array, mixed, number, object } from 'yup';
 
 import { GLYCOL_KINDS, GLYCOL_RANGE, type GlycolKind } from '@/shared/calc/glycol';
 
@@ -38,7 +38,6 @@ export const heatingReadingsSchema = object({
   pumpInletPressureGaugePa: gaugePressurePa('Pump inlet pressure').nullable().optional(),
   pumpOutletPressureGaugePa: gaugePressurePa('Pump outlet pressure').nullable().optional(),
 });
-export type HeatingReadingsInput = InferType<typeof heatingReadingsSchema>;
 
 /** Design values for one heating system, in SI. */
 export const heatingSystemSettingsSchema = object({
@@ -56,7 +55,6 @@ export const heatingSystemSettingsSchema = object({
   const { fillPressureGaugePa: fill, safetyValveSettingGaugePa: valve } = value ?? {};
   return fill === null || fill === undefined || valve === null || valve === undefined || fill < valve;
 });
-export type HeatingSystemSettingsInput = InferType<typeof heatingSystemSettingsSchema>;
 
 /** Inputs of the expansion vessel check: litres, °C, metres, bar gauge. */
 export const expansionVesselInputsSchema = object({
@@ -94,4 +92,3 @@ export const expansionVesselInputsSchema = object({
     .default(null),
   measuredPressureBarGauge: number().label('Measured pressure').min(0, 'Measured pressure cannot be negative').max(100).nullable().optional(),
 });
-export type ExpansionVesselInputsInput = InferType<typeof expansionVesselInputsSchema>;

@@ -22,10 +22,8 @@ export const mbarToPa = (mbar: number): number => mbar * PA_PER_MBAR;
 export const paToMbar = (pa: number): number => pa / PA_PER_MBAR;
 
 export const gaugeToAbsolutePa = (gaugePa: number): number => gaugePa + STANDARD_ATMOSPHERE_PA;
-export const absoluteToGaugePa = (absPa: number): number => absPa - STANDARD_ATMOSPHERE_PA;
 
 export const celsiusToKelvin = (c: number): number => c + CELSIUS_TO_KELVIN_OFFSET;
-export const kelvinToCelsius = (k: number): number => k - CELSIUS_TO_KELVIN_OFFSET;
 
 export const litresToM3 = (litres: number): number => litres / 1000;
 export const m3ToLitres = (m3: number): number => m3 * 1000;

@@ -89,16 +89,16 @@ export const SUPPLY_ISOLATION_HINT: Partial<Record<AssetType, string>> = {
 };
 
 export const VALVE_ISOLATION = ['manual', 'motorised', 'none'] as const;
-export type ValveIsolation = (typeof VALVE_ISOLATION)[number];
+type ValveIsolation = (typeof VALVE_ISOLATION)[number];
 export const ISOLATOR_FORMS = ['isolator', 'switch-disconnector', 'fused-spur', 'plug-and-socket'] as const;
-export type IsolatorForm = (typeof ISOLATOR_FORMS)[number];
+type IsolatorForm = (typeof ISOLATOR_FORMS)[number];
 
-export const VALVE_ISOLATION_LABELS: Record<ValveIsolation, string> = {
+const VALVE_ISOLATION_LABELS: Record<ValveIsolation, string> = {
   manual: 'Manual isolating valve',
   motorised: 'Motorised isolating valve',
   none: 'Control valve (does not isolate)',
 };
-export const ISOLATOR_FORM_LABELS: Record<IsolatorForm, string> = {
+const ISOLATOR_FORM_LABELS: Record<IsolatorForm, string> = {
   isolator: 'Isolator',
   'switch-disconnector': 'Switch-disconnector',
   'fused-spur': 'Fused spur',

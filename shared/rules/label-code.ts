@@ -25,10 +25,10 @@ export const LABEL_CODE_ALPHABET = '23456789ACEFHJKMNPRTWXY';
 export const LABEL_CODE_LENGTH = 12;
 
 /** Characters per group when a code is shown to a person, e.g. `7KXM-4HAP-R2WC`. */
-export const LABEL_CODE_GROUP = 4;
+const LABEL_CODE_GROUP = 4;
 
 /** Path segment in front of the code in a label URL: `<PUBLIC_URL>/l/<code>`. */
-export const LABEL_PATH_SEGMENT = 'l';
+const LABEL_PATH_SEGMENT = 'l';
 
 const ALPHABET_SIZE = LABEL_CODE_ALPHABET.length;
 // Largest multiple of 23 below 256: bytes at or above it are discarded so every symbol is equally likely.

@@ -1,3 +1,5 @@
+import type { ListResponse } from '@/shared/types/api';
+
 export const MAX_PAGE_SIZE = 200;
 export const DEFAULT_PAGE_SIZE = 50;
 /** No list holds more than this many pages; a larger page number is refused (400), not sent to the database. */
@@ -15,3 +17,9 @@ export function readPaging(query: { page?: unknown; pageSize?: unknown }) {
 
 /** A page of a list as the services read it: `readPaging`'s answer. */
 export type Paging = ReturnType<typeof readPaging>;
+
+/** The rows of one page, for a query's `limit` and `offset`. */
+export const pageRows = (paging: Paging) => ({ limit: paging.pageSize, offset: paging.offset });
+
+/** A list answer: one page of items, the total, and the page asked for. */
+export const listPage = <T>(items: T[], total: number, paging: Paging): ListResponse<T> => ({ items, total, page: paging.page, pageSize: paging.pageSize });

@@ -4,7 +4,7 @@
 import type { ReadingValueKey } from '@/shared/rules/reading-keys';
 import type { AssetType, EnergySource } from '@/shared/rules/register';
 
-export type ReadingSectionKey = 'heating' | 'pressure' | 'pump' | 'unit' | 'treatment' | 'gas' | 'flue' | 'hot-water' | 'weather';
+type ReadingSectionKey = 'heating' | 'pressure' | 'pump' | 'unit' | 'treatment' | 'gas' | 'flue' | 'hot-water' | 'weather';
 
 export interface ReadingSection {
   key: ReadingSectionKey;

@@ -9,7 +9,7 @@ import type { TagLike } from '@/shared/rules/tags';
  */
 export const HANDOVER_OFFER_MINUTES = 30;
 
-export interface HandoverOfferLike {
+interface HandoverOfferLike {
   toUserId: number | null;
   lapsesAt: string | Date | null;
 }

@@ -4,7 +4,7 @@ import type { Role } from '@/shared/rules/roles';
 export const TAG_KINDS = ['isolation', 'override'] as const;
 export type TagKind = (typeof TAG_KINDS)[number];
 
-export const TAG_STATUSES = ['live', 'cleared'] as const;
+const TAG_STATUSES = ['live', 'cleared'] as const;
 export type TagStatus = (typeof TAG_STATUSES)[number];
 
 export const ISOLATION_METHODS = ['valve-locked', 'isolator-locked', 'fuse-withdrawn', 'blank-fitted', 'disconnected', 'other'] as const;
@@ -19,7 +19,7 @@ export const ISOLATION_METHOD_LABELS: Record<IsolationMethod, string> = {
   other: 'Other (described)',
 };
 
-export const TAG_EVENT_TYPES = [
+const TAG_EVENT_TYPES = [
   'raised', 'proved', 'extended', 'handover-offered', 'handover-withdrawn', 'handed-over', 'reassigned-in-absence',
   'note-added', 'photo-added', 'cleared', 'cleared-in-absence', 'acknowledged',
 ] as const;
@@ -55,8 +55,8 @@ export const RELEASE_CHECK_LABELS: Record<ReleaseCheck, string> = {
 export const MIN_CLEARANCE_REASON = 10;
 export const MIN_RAISE_REASON = 5;
 /** Engineers may set an expiry at most this far ahead; supervisors and admins up to MAX_EXPIRY_DAYS_SUPERVISOR. */
-export const MAX_EXPIRY_DAYS_ENGINEER = 14;
-export const MAX_EXPIRY_DAYS_SUPERVISOR = 90;
+const MAX_EXPIRY_DAYS_ENGINEER = 14;
+const MAX_EXPIRY_DAYS_SUPERVISOR = 90;
 /** Due soon: expiring within this many hours. */
 export const DUE_SOON_HOURS = 24;
 

@@ -23,7 +23,7 @@ function partsInZone(instant: Date, timeZone: string) {
 }
 
 /** Offset of the zone from UTC at that instant, in milliseconds (positive east of Greenwich). */
-export function zoneOffsetMs(instant: Date, timeZone: string): number {
+function zoneOffsetMs(instant: Date, timeZone: string): number {
   const p = partsInZone(instant, timeZone);
   const asUtc = Date.UTC(p.year, p.month - 1, p.day, p.hour, p.minute, p.second);
   return asUtc - Math.floor(instant.getTime() / 1000) * 1000;

@@ -11,7 +11,7 @@ export const VISIT_DECISION_LABELS: Record<VisitDecisionAction, string> = {
 };
 
 /** Words for a note left with a tag: enough to tell the next person what was left and why. */
-export const MIN_LEAVE_NOTE = 10;
+const MIN_LEAVE_NOTE = 10;
 
 /**
  * Why a decision cannot stand, or null. An override left behind must carry a note: the next person finds plant
@@ -31,7 +31,7 @@ export function decisionProblem(kind: TagKind, action: VisitDecisionAction, note
  * Order for a person's own live tags and a place's live tags: what needs acting on first. Unproved isolations
  * (when the record carries `proved`), then past expiry, then expiring soon, then the rest by expiry.
  */
-export function attentionRank(tag: { proved?: boolean | null; kind: TagKind; overdue: boolean; dueSoon: boolean }): number {
+function attentionRank(tag: { proved?: boolean | null; kind: TagKind; overdue: boolean; dueSoon: boolean }): number {
   if (tag.kind === 'isolation' && tag.proved === false) return 0;
   if (tag.overdue) return 1;
   if (tag.dueSoon) return 2;

@@ -8,7 +8,7 @@ import { idField, oneOfField, pagingQuery, searchField } from '@/shared/schemas/
 /** The query strings of the lists and files, one schema each; `validate({ query })` runs them on the server. */
 
 /** The orders the item list offers; `-` in front for descending. */
-export const ASSET_SORTS = ['plantId', '-plantId', 'name', '-name', 'type', '-type', 'nextServiceDue', '-nextServiceDue'] as const;
+const ASSET_SORTS = ['plantId', '-plantId', 'name', '-name', 'type', '-type', 'nextServiceDue', '-nextServiceDue'] as const;
 export type AssetSort = (typeof ASSET_SORTS)[number];
 
 const flag = () => yup.boolean().transform((_v, raw) => raw === true || raw === 'true' || raw === '1').default(false);
@@ -38,7 +38,7 @@ export const boardQuery = pagingQuery.shape({
 });
 export type BoardQueryInput = yup.InferType<typeof boardQuery>;
 
-export const LABEL_LAYOUTS = ['sheet', 'roll'] as const;
+const LABEL_LAYOUTS = ['sheet', 'roll'] as const;
 export type LabelLayout = (typeof LABEL_LAYOUTS)[number];
 
 /** `GET /api/labels.pdf`: the items by id, or every item of a plant room or of a site. */

@@ -28,7 +28,7 @@ export const MAX_SURFACE_TEMPERATURES = 12;
 
 const { min: minC, max: maxC } = LIQUID_WATER_RANGE_C;
 
-export const surfaceTemperatureSchema = object({
+const surfaceTemperatureSchema = object({
   location: string().trim().required('Say where the temperature was taken.').max(80, 'At most 80 characters.'),
   temperatureC: number()
     .typeError('Enter a number.')

@@ -20,7 +20,7 @@ const isoDate = () =>
 const partial = (fields: object) =>
   Object.fromEntries(Object.entries(fields).map(([k, s]) => [k, (s as yup.AnySchema).optional().default(undefined)]));
 
-export const IANA_ZONE_PATTERN = /^[A-Za-z_]+(\/[A-Za-z0-9_+-]+)+$|^UTC$/;
+const IANA_ZONE_PATTERN = /^[A-Za-z_]+(\/[A-Za-z0-9_+-]+)+$|^UTC$/;
 
 export const siteSchema = yup.object({
   name: yup.string().trim().min(2, 'At least 2 characters.').max(160).required('Name the site.'),
@@ -34,7 +34,7 @@ export type SiteInput = yup.InferType<typeof siteSchema>;
 
 export const sitePatchSchema = yup.object(partial(siteSchema.fields));
 
-export const safetyLocationsSchema = yup.object({
+const safetyLocationsSchema = yup.object({
   emergencyStop: text(400),
   gasIsolation: text(400),
   electricalIsolator: text(400),

@@ -32,7 +32,7 @@ const forIsolation = <S extends yup.AnySchema>(schema: S, then: (s: S) => S): S 
 const reasonText = (min: number, what: string) =>
   yup.string().trim().required(`State the reason for ${what}.`).min(min, `At least ${min} characters: say what and why.`).max(2000);
 
-export const tagPointSchema = yup.object({
+const tagPointSchema = yup.object({
   assetId: yup.number().integer().positive().nullable().default(null),
   description: yup.string().trim().max(300).default(''),
   method: yup.string().oneOf([...ISOLATION_METHODS], 'Choose how this point is isolated.').required('Choose how this point is isolated.'),

@@ -9,7 +9,7 @@ export const startVisitSchema = yup.object({
 });
 export type StartVisitInput = yup.InferType<typeof startVisitSchema>;
 
-export const visitDecisionSchema = yup.object({
+const visitDecisionSchema = yup.object({
   tagId: yup.number().integer().positive().required(),
   action: yup.string().oneOf([...VISIT_DECISION_ACTIONS], 'Choose leave, hand-over or clear.').required('Choose leave, hand-over or clear.'),
   note: yup.string().trim().max(2000).default(''),

@@ -11,7 +11,7 @@ import type {
   SettingChoice,
   WaterAppearance,
 } from '@/shared/calc';
-import type { ListResponse } from '@/shared/types/user';
+import type { ListResponse } from '@/shared/types/api';
 
 export interface SurfaceTemperature {
   location: string;
