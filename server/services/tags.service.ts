@@ -18,7 +18,7 @@ import type { ListResponse } from '@/shared/types/api';
 import type { Tag as TagDto } from '@/shared/types/tags';
 
 export async function getTag(actor: AuthUser, id: number): Promise<TagDto> {
-  const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId }, include: tagInclude }) : null;
+  const tag = await Tag.findOne({ where: { id, organisationId: actor.organisationId }, include: tagInclude });
   if (!tag || !seesSite(actor, (tag as Tag & { asset?: Asset }).asset?.siteId)) throw notFound('Tag');
   const photos = (await photosOf('tagId', [tag.id])).get(tag.id) ?? [];
   return { ...toTagDto(tag, await loadEvents(tag.id)), photoCount: photos.length, photos: photos.map(toPhotoDto) };
