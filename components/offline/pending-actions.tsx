@@ -1,5 +1,7 @@
 import { MaterialCommunityIcons } from '@expo/vector-icons';
 import { Link } from 'expo-router';
+import { onlineManager } from '@tanstack/react-query';
+import { useMemo, useSyncExternalStore } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, layout, radius, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
@@ -7,6 +9,7 @@ import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { useSiteQuery } from '@/hooks/api/use-sites';
+import { useTagsQuery } from '@/hooks/api/use-tags';
 import { flushOutbox, outbox } from '@/hooks/offline/send-or-queue';
 import { useOutboxEntries } from '@/hooks/offline/use-outbox';
 import type { OutboxEntry } from '@/hooks/offline/outbox-types';
@@ -31,20 +34,29 @@ function PendingEntry({ entry, actions }: { entry: OutboxEntry; actions: boolean
       </View>
     );
   }
+  const clearance = entry.kind === 'tag-clear';
+  const title = `${clearance ? 'Clearance waiting to send' : 'Waiting to send'}: ${entry.summary}`;
   return (
-    <View testID="pending-entry" style={styles.waiting} accessibilityLabel={`Waiting to send: ${entry.summary}`}>
+    <View testID="pending-entry" style={styles.waiting} accessibilityLabel={title}>
       <MaterialCommunityIcons name="cloud-upload-outline" size={26} color={colors.mandatory} />
       <View style={{ flex: 1 }}>
-        <Text bold>{`Waiting to send: ${entry.summary}`}</Text>
-        <Text muted variant="small">{`Taken ${when(entry.createdAt)} on this device. Not on record until the server confirms it.`}</Text>
+        <Text bold>{title}</Text>
+        <Text muted variant="small">
+          {clearance
+            ? `Taken ${when(entry.createdAt)} on this device. The tag stays live on record until the server confirms the clearance.`
+            : `Taken ${when(entry.createdAt)} on this device. Not on record until the server confirms it.`}
+        </Text>
       </View>
     </View>
   );
 }
 
-/** The actions of one item or tag still on this device; nothing when there are none. */
-export function PendingForRecord({ assetId, tagId }: { assetId?: number; tagId?: number }) {
-  const entries = useOutboxEntries({ assetId, tagId });
+/** The actions of one item (and of its tags) or of one tag still on this device; nothing when there are none. */
+export function PendingForRecord({ assetId, tagId, tagIds }: { assetId?: number; tagId?: number; tagIds?: readonly number[] }) {
+  const all = useOutboxEntries();
+  const entries = all.filter((e) =>
+    (assetId !== undefined && (e.assetId === assetId || (e.tagId !== undefined && !!tagIds?.includes(e.tagId)))) ||
+    (tagId !== undefined && e.tagId === tagId));
   if (!entries.length) return null;
   return (
     <Card>
@@ -61,23 +73,36 @@ export function PendingForRecord({ assetId, tagId }: { assetId?: number; tagId?:
  */
 export function ItemOffline({ asset }: { asset: Pick<Asset, 'id' | 'siteId'> }) {
   useSiteQuery(asset.siteId);
-  return <PendingForRecord assetId={asset.id} />;
+  // The item's tags as its record shows them (the same cached list): a note or clearance queued on one belongs here too.
+  const tags = useTagsQuery({ assetId: asset.id });
+  const tagIds = useMemo(() => (tags.data?.items ?? []).map((t) => t.id), [tags.data]);
+  return <PendingForRecord assetId={asset.id} tagIds={tagIds} />;
 }
 
-/** A strip at the top of every signed-in screen while anything waits or was refused. */
+/** A strip at the top of every signed-in screen with no signal, and while anything waits or was refused. */
 export function PendingBanner() {
   const entries = useOutboxEntries();
-  if (!entries.length) return null;
+  const online = useSyncExternalStore(onlineManager.subscribe, () => onlineManager.isOnline(), () => true);
+  const noSignal = online ? null : (
+    <View style={styles.noSignal} testID="no-signal-banner" accessibilityRole="alert">
+      <MaterialCommunityIcons name="cloud-off-outline" size={24} color={colors.ink} />
+      <Text bold style={{ flex: 1 }}>No signal: showing what this device saved.</Text>
+    </View>
+  );
+  if (!entries.length) return noSignal;
   const refused = entries.filter((e) => e.state === 'refused').length;
   const waiting = entries.length - refused;
   const words = [waiting ? `${waiting} waiting to send` : '', refused ? `${refused} refused` : ''].filter(Boolean).join(', ');
   return (
-    <Link href="/pending" asChild>
-      <Pressable style={StyleSheet.flatten([styles.banner, refused ? styles.bannerRefused : null])} accessibilityRole="link" testID="pending-banner">
-        <MaterialCommunityIcons name={refused ? 'alert-octagon' : 'cloud-upload-outline'} size={24} color={colors.ink} />
-        <Text bold>{`Actions on this device: ${words}`}</Text>
-      </Pressable>
-    </Link>
+    <>
+      {noSignal}
+      <Link href="/pending" asChild>
+        <Pressable style={StyleSheet.flatten([styles.banner, refused ? styles.bannerRefused : null])} accessibilityRole="link" testID="pending-banner">
+          <MaterialCommunityIcons name={refused ? 'alert-octagon' : 'cloud-upload-outline'} size={24} color={colors.ink} />
+          <Text bold>{`Actions on this device: ${words}`}</Text>
+        </Pressable>
+      </Link>
+    </>
   );
 }
 
@@ -90,7 +115,7 @@ export function PendingActionsList() {
   return (
     <View style={{ gap: space.md }} testID="pending-list">
       {entries.map((e) => <PendingEntry key={e.key} entry={e} actions />)}
-      <Button title="Send now" onPress={() => void flushOutbox()} testID="pending-send-now" />
+      {entries.some((e) => e.state === 'waiting') ? <Button title="Send now" onPress={() => void flushOutbox()} testID="pending-send-now" /> : null}
     </View>
   );
 }
@@ -101,4 +126,5 @@ const styles = StyleSheet.create({
   link: { minHeight: layout.minTouch, paddingVertical: space.md },
   banner: { flexDirection: 'row', gap: space.sm, alignItems: 'center', minHeight: layout.minTouch, paddingHorizontal: space.lg, backgroundColor: colors.mandatorySoft, borderBottomWidth: 2, borderBottomColor: colors.mandatory },
   bannerRefused: { backgroundColor: colors.dangerSoft, borderBottomColor: colors.danger },
+  noSignal: { flexDirection: 'row', gap: space.sm, alignItems: 'center', minHeight: layout.minTouch, paddingHorizontal: space.lg, paddingVertical: space.xs, backgroundColor: colors.surfaceSunk, borderBottomWidth: 2, borderBottomColor: colors.line },
 });

@@ -1,3 +1,4 @@
+import { answered, noAnswer } from '@/hooks/offline/connectivity';
 import type { ApiErrorBody, ErrorCode, FieldErrors } from '@/shared/types/api';
 
 /** An API failure in a form people can read; `fields` maps form fields to messages. */
@@ -46,8 +47,10 @@ export async function request<T>(path: string, opts: RequestOptions = {}): Promi
   try {
     res = await fetch(`${BASE}/api${path}`, { method: opts.method ?? 'GET', headers, body });
   } catch {
+    noAnswer();
     throw new RequestError(0, 'offline', 'Cannot reach the Isoledger server. Check your connection and try again.');
   }
+  answered();
   if (res.status === 401 && token && !path.startsWith('/auth/login')) onUnauthenticated?.();
   if (!res.ok) {
     let parsed: ApiErrorBody | null = null;

@@ -2,6 +2,7 @@ import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tansta
 import type { ImagePickerAsset } from 'expo-image-picker';
 import { fetchBlob, request } from '@/hooks/api/request';
 import { sendOrQueue } from '@/hooks/offline/send-or-queue';
+import { assetCopyOr, offlineAssetCopy } from '@/hooks/offline/visited-items';
 import { plantRoomKeys } from '@/hooks/api/use-plant-rooms';
 import { photoFormData } from '@/hooks/api/use-photos';
 import { siteKeys } from '@/hooks/api/use-sites';
@@ -52,8 +53,14 @@ export function useAssetsQuery(filters: AssetFilters, enabled = true) {
 }
 
 export function useAssetQuery(id: number) {
+  const qc = useQueryClient();
   // Fresh for a few seconds, so a record just answered by a label scan is shown from the cache, not fetched again.
-  return useQuery({ queryKey: assetKeys.detail(id), queryFn: () => request<Asset>(`/assets/${id}`), enabled: id > 0, staleTime: ASSET_FRESH_MS });
+  return useQuery({
+    queryKey: assetKeys.detail(id), queryFn: () => request<Asset>(`/assets/${id}`).catch((err) => assetCopyOr(qc, id, err)), enabled: id > 0, staleTime: ASSET_FRESH_MS,
+    // With no signal, an item seen in its plant room's list opens from that row.
+    initialData: () => offlineAssetCopy(qc, id)?.data,
+    initialDataUpdatedAt: () => offlineAssetCopy(qc, id)?.updatedAt,
+  });
 }
 
 function useInvalidateRegister() {

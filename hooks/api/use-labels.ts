@@ -1,8 +1,8 @@
-import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { request } from '@/hooks/api/request';
 import { assetKeys } from '@/hooks/api/use-assets';
+import { cachedAssetByLabel } from '@/hooks/offline/visited-items';
 import type { Asset } from '@/shared/types/register';
-import type { ListResponse } from '@/shared/types/user';
 
 export const labelKeys = {
   all: ['labels'] as const,
@@ -29,14 +29,6 @@ export function useLabelQuery(code: string) {
     initialData: () => cachedAssetByLabel(qc, code),
     initialDataUpdatedAt: 0,
   });
-}
-
-function cachedAssetByLabel(qc: QueryClient, code: string): Asset | undefined {
-  for (const [, data] of qc.getQueriesData<Asset | ListResponse<Asset>>({ queryKey: assetKeys.all })) {
-    const found = data && ('items' in data ? data.items : [data]).find((a) => a.labelCode === code);
-    if (found) return found;
-  }
-  return undefined;
 }
 
 export function useRetiredLabelsQuery(assetId: number) {

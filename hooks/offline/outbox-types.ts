@@ -23,6 +23,8 @@ export interface OutboxEntry extends OutboxAction {
   path: string;
   body?: unknown;
   form?: StoredFormField[];
+  /** Method, path and body as first submitted: the same action submitted again while this waits is not added twice. */
+  fingerprint?: string;
   createdAt: string;
   state: 'waiting' | 'refused';
   attempts: number;

@@ -8,6 +8,7 @@ export interface NewOutboxEntry extends OutboxAction {
   path: string;
   body?: unknown;
   form?: StoredFormField[];
+  fingerprint?: string;
 }
 
 export interface FlushResult {

@@ -1,7 +1,9 @@
 import { RequestError, currentToken, request, type RequestOptions } from '@/hooks/api/request';
 import { Outbox } from '@/hooks/offline/outbox';
 import { createOutboxStore } from '@/hooks/offline/outbox-store';
-import type { OutboxAction, OutboxEntry, StoredFormField } from '@/hooks/offline/outbox-types';
+import type { OutboxAction, OutboxEntry, OutboxKind, StoredFormField } from '@/hooks/offline/outbox-types';
+
+const TIMED_KINDS: ReadonlySet<OutboxKind> = new Set(['reading']);
 
 /** The device's one outbox. */
 export const outbox = new Outbox(createOutboxStore());
@@ -48,6 +50,15 @@ function toFormData(fields: StoredFormField[]): FormData {
 }
 
 /**
+ * A reading set is stored with the time it was taken. Sent at once, the server's clock gives it; queued, it would be
+ * the time the signal returned, so the set carries the moment it was queued (the schema allows for clock skew).
+ */
+function stampTaken(kind: OutboxKind, body: unknown): unknown {
+  if (!TIMED_KINDS.has(kind) || !body || typeof body !== 'object' || (body as { takenAt?: unknown }).takenAt) return body;
+  return { ...body, takenAt: new Date().toISOString() };
+}
+
+/**
  * Sends an action with an idempotency key; with no signal, keeps it in the outbox (same key) and throws QueuedError.
  * While earlier actions are still waiting, a new one waits behind them so the server sees them in the order taken.
  */
@@ -64,15 +75,21 @@ export async function sendOrQueue<T>(path: string, opts: RequestOptions & { meth
     }
   }
   const isForm = opts.body instanceof FormData;
-  await outbox.add({
-    ...action,
-    key,
-    owner: owner!,
-    method: opts.method,
-    path,
-    body: isForm ? undefined : opts.body,
-    form: isForm ? storeForm(opts.body as FormData) : undefined,
-  });
+  // The same action submitted again while it waits (a second tap on a form still open) stays one entry.
+  const fingerprint = isForm ? undefined : JSON.stringify([opts.method, path, opts.body ?? null]);
+  const waiting = fingerprint && outbox.snapshot().some((e) => e.owner === owner && e.state === 'waiting' && e.fingerprint === fingerprint);
+  if (!waiting) {
+    await outbox.add({
+      ...action,
+      key,
+      owner: owner!,
+      method: opts.method,
+      path,
+      body: isForm ? undefined : stampTaken(action.kind, opts.body),
+      form: isForm ? storeForm(opts.body as FormData) : undefined,
+      fingerprint,
+    });
+  }
   if (queueAhead) void flushOutbox();
   throw new QueuedError();
 }

@@ -1,4 +1,5 @@
-import { useQueryClient } from '@tanstack/react-query';
+import { onlineManager, useQueryClient } from '@tanstack/react-query';
+import { request } from '@/hooks/api/request';
 import { useEffect, useSyncExternalStore } from 'react';
 import { useAuth } from '@/hooks/auth/auth-provider';
 import { flushOutbox, outbox, tokenOwner } from '@/hooks/offline/send-or-queue';
@@ -6,15 +7,17 @@ import type { OutboxEntry } from '@/hooks/offline/outbox-types';
 
 // How often waiting entries are tried again while the app is open, besides the browser's "online" event.
 const RETRY_EVERY_MS = 15_000;
+// How often, with no signal, the server is looked for.
+const PROBE_EVERY_MS = 5_000;
 
 /** Every entry on this device, oldest first; re-renders when one is added, sent or refused. */
-export function useOutboxEntries(filter?: { assetId?: number; tagId?: number }): OutboxEntry[] {
+export function useOutboxEntries(): OutboxEntry[] {
   const all = useSyncExternalStore(outbox.subscribe, outbox.snapshot, outbox.snapshot);
   const { token } = useAuth();
   useEffect(() => { void outbox.load(); }, []);
   // Only the signed-in person's actions: a shared device never shows one person's entries to the next.
   const owner = tokenOwner(token);
-  return all.filter((e) => e.owner === owner && (filter?.assetId === undefined || e.assetId === filter.assetId) && (filter?.tagId === undefined || e.tagId === filter.tagId));
+  return all.filter((e) => e.owner === owner);
 }
 
 /**
@@ -34,10 +37,15 @@ export function useOutboxSender() {
     void send();
     const onOnline = () => void send();
     const timer = setInterval(() => { if (outbox.snapshot().some((e) => e.state === 'waiting')) void send(); }, RETRY_EVERY_MS);
+    // With no signal nothing else asks the server, so a small request looks for it; its answer resumes react-query.
+    const probe = setInterval(() => { if (!onlineManager.isOnline()) void request('/health').catch(() => undefined); }, PROBE_EVERY_MS);
+    const stopWatching = onlineManager.subscribe((online) => { if (online) void send(); });
     if (typeof window !== 'undefined' && window.addEventListener) window.addEventListener('online', onOnline);
     return () => {
       stopped = true;
       clearInterval(timer);
+      clearInterval(probe);
+      stopWatching();
       if (typeof window !== 'undefined' && window.removeEventListener) window.removeEventListener('online', onOnline);
     };
   }, [token, qc]);

@@ -252,6 +252,30 @@ describe('the outbox against the real server', () => {
     expect(await eventTypes(tagId)).toEqual(['raised', 'note-added', 'extended']);
   });
 
+  it('stores a queued reading with the time it was taken, and a form submitted twice while waiting as one action', async () => {
+    await signInAs('engineer');
+    const tagId = ((await raise(plant.isolator.id)) as { id: number }).id;
+    await noSignal();
+    const queuedAt = Date.now();
+    expect(await act(() => logReading(plant.boiler.id, 66))).toBe('queued');
+    // A second tap on the still-open form: the same action, not a second one.
+    expect(await act(() => logReading(plant.boiler.id, 66))).toBe('queued');
+    expect(await act(() => tagAction(tagId, 'notes', { text: 'Panel door left locked' }, 'tag-note'))).toBe('queued');
+    expect(await act(() => tagAction(tagId, 'notes', { text: 'Panel door left locked' }, 'tag-note'))).toBe('queued');
+    expect(client.outbox.snapshot().map((e) => e.kind)).toEqual(['reading', 'tag-note']);
+    await client.flushOutbox();
+
+    // The signal returns well after the reading was taken.
+    await new Promise((r) => setTimeout(r, 1500));
+    await signal();
+    const sentAt = Date.now();
+    expect(await client.flushOutbox()).toEqual({ sent: 2, refused: 0, waiting: 0 });
+    const [row] = await Reading.findAll({ where: { assetId: plant.boiler.id, createdBy: u.engineer.id }, order: [['id', 'DESC']], limit: 1 });
+    expect(row.takenAt.getTime()).toBeGreaterThanOrEqual(queuedAt - 1000);
+    expect(row.takenAt.getTime()).toBeLessThan(sentAt - 1000);
+    expect(await eventTypes(tagId)).toEqual(['raised', 'note-added']);
+  });
+
   it('holds a new action behind waiting ones, so the server never sees them out of order', async () => {
     await signInAs('engineer');
     const tagId = ((await raise(plant.isolator.id)) as { id: number }).id;
