@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it, onTestFailed } from 'vitest';
-import { PHONE, launch, openPage, screenshot, signIn, type Session } from '@/test/e2e/support/browser';
+import { DESKTOP, PHONE, launch, openPage, screenshot, signIn, type Session } from '@/test/e2e/support/browser';
 import { api, apiToken } from '@/test/e2e/support/api';
 import type { Asset } from '@/shared/types/register';
 import type { ReadingList } from '@/shared/types/readings';
@@ -242,6 +242,9 @@ describe('in a plant room with no signal, on a phone', () => {
     await expect(page.getByTestId('pending-entry').innerText()).resolves.toMatch(/This tag has already been cleared\./);
     await expect(page.getByTestId('pending-banner').innerText()).resolves.toMatch(/1 refused/);
     await screenshot(page, 'offline-pending-refused-phone');
+    await page.setViewportSize(DESKTOP);
+    await screenshot(page, 'offline-pending-refused-desktop');
+    await page.setViewportSize(PHONE);
     // The one clearance on record is the terminal's; the refused one wrote nothing.
     const events = (await api<Tag>(baseUrl, token, `/tags/${tag.id}`)).events!.filter((e) => e.type === 'cleared');
     expect(events).toHaveLength(1);
@@ -253,6 +256,45 @@ describe('in a plant room with no signal, on a phone', () => {
     await page.getByTestId('pending-remove').click();
     await page.getByText('Nothing is waiting on this device.').waitFor();
     expect(await readOutbox(page)).toEqual([]);
+    expect(errors.filter((e) => !/ERR_INTERNET_DISCONNECTED|Failed to load resource|Failed to fetch/.test(e))).toEqual([]);
+    expect(offsite).toEqual([]);
+    await context.close();
+  });
+
+  it('keeps the queue when the session ends with no signal, and sends it after the next sign-in', async () => {
+    const tag = await raiseOverride(item.id, 'Pump on hand while the pressure switch is swapped');
+    const { page, context, errors, offsite } = await openPage(session.browser, PHONE);
+    // What the phone showed when a step failed.
+    onTestFailed(async () => { await screenshot(page, `offline-failed-${Date.now()}`); });
+    await signIn(page, baseUrl, 'engineer2@example.test');
+    await page.getByTestId('home-engineer').waitFor();
+    await page.goto(`${baseUrl}/tags/${tag.id}`);
+    await page.getByTestId('tag-header').waitFor();
+    await page.evaluate(async () => { await navigator.serviceWorker.ready; });
+    await page.waitForFunction(() => !!navigator.serviceWorker.controller);
+    await cacheWritten(page);
+
+    await context.setOffline(true);
+    await page.reload();
+    await page.getByTestId('tag-action-note').click();
+    await page.getByTestId('note-text').fill('Pressure switch fitted; waiting for the controls engineer');
+    await page.getByTestId('note-submit').click();
+    await page.getByTestId('action-refusal').getByText(/waiting to send/i).waitFor();
+
+    // Meanwhile the session ends (signed out everywhere from the office), so the signal comes back to a dead session.
+    expect((await fetch(`${baseUrl}/api/auth/logout`, { method: 'POST', headers: { Authorization: `Bearer ${token}` } })).status).toBe(204);
+    token = await apiToken(baseUrl, 'engineer2@example.test');
+    await context.setOffline(false);
+    await page.waitForURL('**/sign-in**', { timeout: 30_000 });
+    const kept = await readOutbox(page);
+    expect(kept.map((e) => [e.value.kind, e.value.state])).toEqual([['tag-note', 'waiting']]);
+    expect(await notesOn(tag.id)).toHaveLength(0);
+
+    // Signed in again: the note goes, once.
+    await signIn(page, baseUrl, 'engineer2@example.test');
+    await page.getByTestId('home-engineer').waitFor();
+    await expect.poll(() => notesOn(tag.id), { timeout: 30_000 }).toHaveLength(1);
+    await expect.poll(() => readOutbox(page)).toEqual([]);
     expect(errors.filter((e) => !/ERR_INTERNET_DISCONNECTED|Failed to load resource|Failed to fetch/.test(e))).toEqual([]);
     expect(offsite).toEqual([]);
     await context.close();
