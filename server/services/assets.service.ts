@@ -28,6 +28,9 @@ export const SITE_PLANT_ID_INDEX = 'assets_site_plant_id_unique';
 /** An item's record lists at most this many live tags (its state counts them all). */
 const RECORD_LIVE_TAGS = 200;
 
+/** The record's live tags without their item: it is the record's own, read once beside them. */
+const recordTagInclude = tagInclude.filter((inc) => inc.as !== 'asset');
+
 const include = [
   { model: Site, as: 'site', attributes: ['id', 'name', 'timeZone'] },
   { model: PlantRoom, as: 'plantRoom', attributes: ['id', 'name'] },
@@ -90,7 +93,7 @@ export async function getAsset(actor: AuthUser, id: number): Promise<AssetDto> {
   const [asset, photos, live, tagPhotos, uses] = await Promise.all([
     Asset.findOne({ where: { id, organisationId: actor.organisationId, ...siteWhere(actor) }, include }),
     photosOf('assetId', [id]),
-    Tag.findAll({ where: { organisationId: actor.organisationId, assetId: id, status: 'live' }, include: tagInclude, order: [['raisedAt', 'DESC'], ['id', 'DESC']] }),
+    Tag.findAll({ where: { organisationId: actor.organisationId, assetId: id, status: 'live' }, include: recordTagInclude, order: [['raisedAt', 'DESC'], ['id', 'DESC']] }),
     liveTagPhotoCounts(actor.organisationId, id),
     pointUses(actor.organisationId, id),
   ]);
@@ -100,7 +103,7 @@ export async function getAsset(actor: AuthUser, id: number): Promise<AssetDto> {
   return {
     ...toAssetDto(asset, { photos: assetPhotos, thumbnailPhotoId: assetPhotos[0]?.id ?? null }),
     ...assetStateFromTags(states, clock.now()),
-    liveTags: live.slice(0, RECORD_LIVE_TAGS).map((t) => ({ ...toTagDto(t), photoCount: tagPhotos.get(t.id) ?? 0 })),
+    liveTags: live.slice(0, RECORD_LIVE_TAGS).map((t) => ({ ...toTagDto(Object.assign(t, { asset })), photoCount: tagPhotos.get(t.id) ?? 0 })),
     pointUses: uses,
   };
 }

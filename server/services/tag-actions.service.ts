@@ -18,7 +18,7 @@ import type { Tag as TagDto } from '@/shared/types/tags';
 
 /** Locks the tag row for the rest of the transaction; another organisation's tag is a 404. */
 async function lockTag(actor: AuthUser, id: number, transaction: Transaction): Promise<Tag> {
-  const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId }, transaction, lock: transaction.LOCK.UPDATE }) : null;
+  const tag = await Tag.findOne({ where: { id, organisationId: actor.organisationId }, transaction, lock: transaction.LOCK.UPDATE });
   if (!tag) throw notFound('Tag');
   return tag;
 }
@@ -135,7 +135,7 @@ export async function proveTag(sequelize: Sequelize, actor: AuthUser, id: number
 export async function addTagPhoto(sequelize: Sequelize, storage: PhotoStorage, actor: AuthUser, id: number, file: Buffer, caption: string | null, idem: Idempotency | null = null): Promise<TagDto> {
   ensurePermission(actor, 'annotateTag', 'Viewers cannot add photos.');
   await once(actor, idem, async () => {
-    const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId } }) : null;
+    const tag = await Tag.findOne({ where: { id, organisationId: actor.organisationId } });
     if (!tag) throw notFound('Tag');
     if (tag.status !== 'live') throw new HttpError(409, 'already-cleared', 'This tag has been cleared; it takes no new photos.');
     await sequelize.transaction(async (transaction) => {

@@ -19,7 +19,7 @@ import type { RaiseTagInput } from '@/shared/schemas/tags';
 import type { Tag as TagDto } from '@/shared/types/tags';
 
 async function findAsset(actor: AuthUser, assetId: number, transaction?: Transaction) {
-  const asset = Number.isSafeInteger(assetId) ? await Asset.findOne({ where: { id: assetId, organisationId: actor.organisationId, ...siteWhere(actor) }, transaction }) : null;
+  const asset = await Asset.findOne({ where: { id: assetId, organisationId: actor.organisationId, ...siteWhere(actor) }, transaction });
   if (!asset) throw notFound('Plant item');
   return asset;
 }
