@@ -17,7 +17,7 @@ export interface FormStatus {
  * Values as the shared schema should see them: Formik's own preparation (empty strings become undefined,
  * so optional fields take their schema defaults) — the same the form's validation runs on.
  */
-export const prepareValues = <T extends object>(values: T) => prepareDataForValidation(values as never) as T;
+export const prepareValues = <T extends object>(values: T) => prepareDataForValidation(values as Record<string, unknown>) as T;
 
 /** A form whose field names differ from the API's (a number typed in a unit) maps each API path to its own. */
 export type FieldPathMap = (apiPath: string) => string;

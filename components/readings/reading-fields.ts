@@ -3,7 +3,7 @@
 import { setIn, type FormikErrors } from 'formik';
 import type { AnySchema } from 'yup';
 import { nestErrors, type FieldPathMap } from '@/components/forms/submit';
-import { formatNumber, fromSi, INHIBITOR_LABELS, toSi, UNIT_OPTIONS, WATER_APPEARANCE_LABELS, type PhysicalQuantity } from '@/shared/calc';
+import { formatNumber, fromSi, INHIBITOR_LABELS, toSi, UNIT_OPTIONS, WATER_APPEARANCE_LABELS, type PhysicalQuantity, type UnitKey } from '@/shared/calc';
 import { READING_CHOICE_KEYS, READING_NUMBER_KEYS, type ReadingChoiceKey, type ReadingNumberKey } from '@/shared/rules/reading-keys';
 import { validateFields } from '@/shared/schemas/field-errors';
 import type { ReadingValues } from '@/shared/types/readings';
@@ -71,13 +71,13 @@ export function parseEntry(text: string): number | null {
 export function entryToSi(text: string, quantity: PhysicalQuantity, unit: string): number | null {
   const n = parseEntry(text);
   if (n === null || Number.isNaN(n)) return n;
-  return toSi(quantity, unit as never, n);
+  return toSi(quantity, unit as UnitKey<PhysicalQuantity>, n);
 }
 
 /** An SI value → text in a unit, for prefilling a form. */
 export function siToEntry(value: number | null | undefined, quantity: PhysicalQuantity, unit: string): string {
   if (value === null || value === undefined) return '';
-  return formatNumber(fromSi(quantity, unit as never, value), 5);
+  return formatNumber(fromSi(quantity, unit as UnitKey<PhysicalQuantity>, value), 5);
 }
 
 export interface ReadingFormValues {
@@ -145,7 +145,7 @@ export function describeValues(values: ReadingValues): { label: string; text: st
     if (v === null || v === undefined) continue;
     const unit = defaultUnit(f.quantity);
     const label = unitLabel(f.quantity, unit);
-    out.push({ label: f.label, text: `${formatNumber(fromSi(f.quantity, unit as never, v), 4)}${label === 'pH' ? '' : ` ${label}`}` });
+    out.push({ label: f.label, text: `${formatNumber(fromSi(f.quantity, unit as UnitKey<PhysicalQuantity>, v), 4)}${label === 'pH' ? '' : ` ${label}`}` });
   }
   for (const k of READING_CHOICE_KEYS) {
     const v = values[k];
