@@ -23,11 +23,11 @@ export interface AssetFormValues {
   attributes: Record<string, string>;
 }
 
-// Read-only screens (an item's record) take these from attribute-fields.ts, which does not load the form library.
-export { attributeFields, type AttributeField } from '@/components/register/attribute-fields';
+// Read-only screens (an item's record) take this from attribute-fields.ts, which does not load the form library.
+export { attributeFields } from '@/components/register/attribute-fields';
 
 /** assetSchema with `attributes` checked by the chosen type's schema. */
-export function schemaFor(type: AssetType | '') {
+function schemaFor(type: AssetType | '') {
   return type ? assetSchema.shape({ attributes: attributeSchemas[type] }) : assetSchema;
 }
 

@@ -1,7 +1,7 @@
 import type { AssetType } from '@/shared/rules/register';
 import { attributeSchemas } from '@/shared/schemas/register';
 
-export interface AttributeField {
+interface AttributeField {
   key: string;
   kind: 'number' | 'text' | 'choice';
   options: string[];

@@ -31,6 +31,7 @@ export const ICON_GLYPHS = {
   'calendar-clock': 0xf00f0,
   'calendar-question': 0xf0692,
   'camera-outline': 0xf0d5d,
+  'cancel': 0xf073a,
   'check': 0xf012c,
   'check-circle': 0xf05e0,
   'check-circle-outline': 0xf05e1,

@@ -46,7 +46,7 @@ export async function requireNoPendingNotices(actor: AuthUser, transaction?: Tra
 /** The holder acknowledges every pending notice on one tag; the acknowledgement is an event in that tag's history. */
 export async function acknowledgeNotices(sequelize: Sequelize, actor: AuthUser, tagId: number, idem: Idempotency | null): Promise<number> {
   const { tagId: id } = await once(actor, idem, () => sequelize.transaction(async (transaction) => {
-    const tag = Number.isSafeInteger(tagId) ? await Tag.findOne({ where: { id: tagId, organisationId: actor.organisationId }, transaction }) : null;
+    const tag = await Tag.findOne({ where: { id: tagId, organisationId: actor.organisationId }, transaction });
     if (!tag) throw notFound('Tag');
     const notices = await TagNotice.findAll({ where: { tagId, userId: actor.id, acknowledgedAt: { [Op.is]: null } }, transaction, lock: transaction.LOCK.UPDATE });
     if (!notices.length) throw new HttpError(409, 'nothing-to-acknowledge', 'You have nothing to acknowledge on this tag.');

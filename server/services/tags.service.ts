@@ -13,31 +13,24 @@ import { loadEvents } from '@/server/services/tag-history.service';
 import { tagInclude, toTagDto } from '@/server/services/tags.dto';
 import { listPage, pageRows, type Paging } from '@/shared/rules/paging';
 import { rolesWith } from '@/shared/rules/permissions';
+import type { TagListQuery } from '@/shared/schemas/queries';
 import type { ListResponse } from '@/shared/types/api';
 import type { Tag as TagDto } from '@/shared/types/tags';
 
 export async function getTag(actor: AuthUser, id: number): Promise<TagDto> {
-  const tag = Number.isSafeInteger(id) ? await Tag.findOne({ where: { id, organisationId: actor.organisationId }, include: tagInclude }) : null;
+  const tag = await Tag.findOne({ where: { id, organisationId: actor.organisationId }, include: tagInclude });
   if (!tag || !seesSite(actor, (tag as Tag & { asset?: Asset }).asset?.siteId)) throw notFound('Tag');
   const photos = (await photosOf('tagId', [tag.id])).get(tag.id) ?? [];
   return { ...toTagDto(tag, await loadEvents(tag.id)), photoCount: photos.length, photos: photos.map(toPhotoDto) };
 }
 
-interface TagFilters {
-  status?: string;
-  /** Only live tags with an open hand-over offer to the caller. */
-  offeredToMe?: boolean;
-  assetId?: number;
-  siteId?: number;
-  kind?: string;
-}
-
-export async function listTags(actor: AuthUser, filters: TagFilters, paging: Paging): Promise<ListResponse<TagDto>> {
+/** Tags by the list's filters (`tagListQuery`), live first, newest raised first. */
+export async function listTags(actor: AuthUser, filters: Omit<TagListQuery, 'page' | 'pageSize'>, paging: Paging): Promise<ListResponse<TagDto>> {
   const where: WhereOptions<Tag> = { organisationId: actor.organisationId };
-  if (filters.status === 'live' || filters.status === 'cleared') Object.assign(where, { status: filters.status });
-  if (filters.kind === 'isolation' || filters.kind === 'override') Object.assign(where, { kind: filters.kind });
+  if (filters.status) Object.assign(where, { status: filters.status });
+  if (filters.kind) Object.assign(where, { kind: filters.kind });
   if (filters.assetId) Object.assign(where, { assetId: filters.assetId });
-  if (filters.offeredToMe) Object.assign(where, { status: 'live', offerToId: actor.id, offerLapsesAt: { [Op.gt]: clock.now() } });
+  if (filters.offeredTo === 'me') Object.assign(where, { status: 'live', offerToId: actor.id, offerLapsesAt: { [Op.gt]: clock.now() } });
   const assetWhere = { ...(filters.siteId ? { siteId: filters.siteId } : {}), ...siteWhere(actor) };
   const narrowed = Reflect.ownKeys(assetWhere).length > 0;
   const include = tagInclude.map((inc) => (inc.as === 'asset' && narrowed ? { ...inc, where: assetWhere, required: true } : inc));

@@ -25,7 +25,7 @@ async function teamMembers(users: User[], transaction?: Transaction): Promise<Te
 }
 
 async function findMember(actor: AuthUser, id: number, transaction: Transaction): Promise<User> {
-  const user = Number.isSafeInteger(id) ? await User.findOne({ where: { id, organisationId: actor.organisationId }, transaction, lock: transaction.LOCK.UPDATE }) : null;
+  const user = await User.findOne({ where: { id, organisationId: actor.organisationId }, transaction, lock: transaction.LOCK.UPDATE });
   if (!user) throw notFound('User');
   return user;
 }

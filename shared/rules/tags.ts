@@ -4,7 +4,7 @@ import type { Role } from '@/shared/rules/roles';
 export const TAG_KINDS = ['isolation', 'override'] as const;
 export type TagKind = (typeof TAG_KINDS)[number];
 
-const TAG_STATUSES = ['live', 'cleared'] as const;
+export const TAG_STATUSES = ['live', 'cleared'] as const;
 export type TagStatus = (typeof TAG_STATUSES)[number];
 
 export const ISOLATION_METHODS = ['valve-locked', 'isolator-locked', 'fuse-withdrawn', 'blank-fitted', 'disconnected', 'other'] as const;

@@ -2,7 +2,7 @@ import * as yup from 'yup';
 import { BOARD_STATES, readBoardSort } from '@/shared/rules/board';
 import { parseIdList } from '@/shared/rules/ids';
 import { ASSET_TYPES } from '@/shared/rules/register';
-import { TAG_KINDS } from '@/shared/rules/tags';
+import { TAG_KINDS, TAG_STATUSES } from '@/shared/rules/tags';
 import { idField, oneOfField, pagingQuery, searchField } from '@/shared/schemas/request';
 
 /** The query strings of the lists and files, one schema each; `validate({ query })` runs them on the server. */
@@ -37,6 +37,16 @@ export const boardQuery = pagingQuery.shape({
   sort: yup.mixed<ReturnType<typeof readBoardSort>>().transform((_v, raw) => readBoardSort(raw)).default(() => readBoardSort(undefined)),
 });
 export type BoardQueryInput = yup.InferType<typeof boardQuery>;
+
+/** `GET /api/tags`: an item's or a site's tags, live or cleared; `offeredTo=me` for live tags offered to the caller. */
+export const tagListQuery = pagingQuery.shape({
+  status: oneOfField('status', TAG_STATUSES),
+  kind: oneOfField('kind', TAG_KINDS),
+  assetId: idField('assetId'),
+  siteId: idField('siteId'),
+  offeredTo: oneOfField('offeredTo', ['me'] as const),
+});
+export type TagListQuery = yup.InferType<typeof tagListQuery>;
 
 const LABEL_LAYOUTS = ['sheet', 'roll'] as const;
 export type LabelLayout = (typeof LABEL_LAYOUTS)[number];

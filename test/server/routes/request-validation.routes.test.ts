@@ -30,6 +30,8 @@ describe('bad numbers in the path or query', () => {
     '/api/assets/1e999/label/retired',
     '/api/tags?assetId=1e999',
     '/api/tags?siteId=abc',
+    '/api/tags?status=gone',
+    '/api/tags?kind=lockout',
     '/api/labels.pdf?plantRoomId=1e999',
     '/api/labels.pdf?siteId=-4',
     '/api/labels.pdf?assetIds=1,1e999',

@@ -15,7 +15,7 @@ import { lazyPart } from '@/components/ui/lazy-part';
 import { ItemOffline } from '@/components/offline/pending-actions';
 import { AssetDetails } from '@/components/register/asset-details';
 import { AssetStateSlot } from '@/components/register/asset-state-slot';
-import { Breadcrumbs } from '@/components/register/breadcrumbs';
+import { Breadcrumbs, type Crumb } from '@/components/register/breadcrumbs';
 import { ASSET_TYPE_ICONS } from '@/components/register/register-vocabulary';
 import { errorMessage } from '@/hooks/api/request';
 import { useAddAssetPhotoMutation, useArchiveAssetMutation, useAssetQuery } from '@/hooks/api/use-assets';
@@ -25,8 +25,8 @@ import { useNow } from '@/components/tags/use-now';
 import { VisitBanner } from '@/components/visits/visit-banner';
 import { ASSET_TYPE_LABELS } from '@/shared/rules/register';
 
+// Below the item's state: fetched once the state has shown, so a scanned label answers "is it isolated?" first.
 const AssetLabelCard = lazyPart(() => import('@/components/labels/asset-label-card').then((m) => m.AssetLabelCard), { deferred: true });
-// Below the item's state: fetched once the record has rendered, so a scanned label shows its state first.
 const ConnectionsCard = lazyPart(() => import('@/components/connections/connections-card').then((m) => m.ConnectionsCard), { deferred: true });
 const AssetReadingsSection = lazyPart(() => import('@/components/readings/asset-readings-section').then((m) => m.AssetReadingsSection), { deferred: true });
 const PhotoGallery = lazyPart(() => import('@/components/register/photo-gallery').then((m) => m.PhotoGallery), { deferred: true });
@@ -40,13 +40,12 @@ export default function AssetScreen() {
   const archive = useArchiveAssetMutation();
   const [confirming, setConfirming] = useState(false);
   const now = useNow();
-  // The rest of the record waits for the item's state (its tags): a scanned label answers "is it isolated?" first.
   const tags = useTagsQuery({ assetId: id });
   const stateShown = tags.data !== undefined || tags.isError;
   return (
     <QueryScreen query={asset} title="Plant item">
       {(a) => {
-        const trail = [{ label: 'Register', href: '/assets' }, { label: a.siteName, href: `/sites/${a.siteId}` }];
+        const trail: Crumb[] = [{ label: 'Register', href: '/assets' }, { label: a.siteName, href: `/sites/${a.siteId}` }];
         if (a.plantRoomId) trail.push({ label: a.plantRoomName ?? 'Plant room', href: `/plant-rooms/${a.plantRoomId}` });
         const canEdit = perms.canEditRecord(a.createdBy) && !a.archived;
         return (
@@ -54,8 +53,8 @@ export default function AssetScreen() {
             title={`${a.plantId} · ${a.name}`}
             actions={
               <>
-                  {canEdit ? <Button title="Edit" onPress={() => router.push(`/assets/${id}/edit`)} testID="asset-edit" /> : null}
-                  {perms.canArchive && !a.archived ? <Button title="Archive" variant="secondary" onPress={() => setConfirming(true)} testID="asset-archive" /> : null}
+                {canEdit ? <Button title="Edit" onPress={() => router.push(`/assets/${id}/edit`)} testID="asset-edit" /> : null}
+                {perms.canArchive && !a.archived ? <Button title="Archive" variant="secondary" onPress={() => setConfirming(true)} testID="asset-archive" /> : null}
               </>
             }
           >
