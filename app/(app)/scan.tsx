@@ -15,7 +15,7 @@ export default function ScanScreen() {
   const router = useRouter();
   const [foreign, setForeign] = useState<string | null>(null);
 
-  const open = (code: string) => router.push(`/l/${code}` as never);
+  const open = (code: string) => router.push(`/l/${code}`);
   const scanned = (text: string) => {
     const code = parseLabelUrl(text);
     if (code) {

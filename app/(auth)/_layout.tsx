@@ -11,6 +11,6 @@ export default function AuthLayout() {
   const { ready, token } = useAuth();
   const { next } = useGlobalSearchParams<{ next?: string }>();
   if (!ready) return <LoadingView />;
-  if (token) return <Redirect href={safeNext(next ?? nextFromAddress()) as never} />;
+  if (token) return <Redirect href={safeNext(next ?? nextFromAddress())} />;
   return <Slot />;
 }

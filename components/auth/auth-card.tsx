@@ -4,8 +4,8 @@ import { colors, radius, space } from '@/components/theme';
 import { Text } from '@/components/ui/text';
 import { BrandMark } from '@/components/nav/brand-mark';
 
-/** The frame shared by the public account screens: brand, then one card. */
-export function AuthCard({ title, children, testID }: { title: string; children: ReactNode; testID?: string }) {
+/** The frame shared by the public account screens: brand, then one card, then anything that goes `after` it. */
+export function AuthCard({ title, children, testID, after }: { title: string; children: ReactNode; testID?: string; after?: ReactNode }) {
   return (
     <View style={styles.wrap}>
       <View style={styles.brand}>
@@ -19,6 +19,7 @@ export function AuthCard({ title, children, testID }: { title: string; children:
         <Text variant="title">{title}</Text>
         {children}
       </View>
+      {after}
     </View>
   );
 }

@@ -7,9 +7,8 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { FormTextField } from '@/components/forms/bound-fields';
-import { nestErrors } from '@/components/forms/submit';
+import { submitForm, type FormStatus } from '@/components/forms/submit';
 import { AuthCard } from '@/components/auth/auth-card';
-import { RequestError, errorMessage } from '@/hooks/api/request';
 import { useSetPasswordMutation } from '@/hooks/api/use-account';
 import { MIN_PASSWORD_LENGTH } from '@/shared/rules/notifications';
 import { setPasswordSchema } from '@/shared/schemas/team';
@@ -41,18 +40,15 @@ export function SetPasswordForm({ token }: { token: string }) {
         initialValues={{ token, password: '', confirm: '' }}
         validationSchema={formSchema}
         onSubmit={async (values, { setErrors, setStatus }) => {
-          setStatus(undefined);
-          try {
-            const { token: t, password } = setPasswordSchema.cast(values);
-            setDoneFor((await setPassword.mutateAsync({ token: t, password })).email);
-          } catch (err) {
-            if (err instanceof RequestError && err.fields && !err.fields.token) setErrors(nestErrors(err.fields));
-            setStatus({ message: errorMessage(err), badLink: err instanceof RequestError && (err.code === 'link-invalid' || !!err.fields?.token) });
-          }
+          const { token: t, password } = setPasswordSchema.cast(values);
+          // A refused link is said in the banner, with the way to a new one, rather than beside a field.
+          const done = await submitForm<FormValues, { email: string }>({ setErrors: (e) => { if (!e.token) setErrors(e); }, setStatus }, () => setPassword.mutateAsync({ token: t, password }));
+          if (done) setDoneFor(done.email);
         }}
       >
         {({ handleSubmit, errors, isSubmitting, status, submitCount }) => {
-          const problem = status as { message: string; badLink: boolean } | undefined;
+          const failed = status as FormStatus | undefined;
+          const problem = failed && { message: failed.message, badLink: failed.code === 'link-invalid' || !!failed.fields?.token };
           return (
             <>
               <Text>{`At least ${MIN_PASSWORD_LENGTH} characters. A short sentence you will remember is a good choice.`}</Text>

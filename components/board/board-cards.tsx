@@ -39,7 +39,7 @@ function BoardCard({ row, now }: { row: BoardRow; now: Date }) {
   const overdue = row.state === 'overdue';
   return (
     <View style={[styles.card, { borderLeftColor: overdue ? colors.mandatory : TONE_COLORS[kind.tone].solid }, overdue && styles.overdue]} testID={`board-row-${row.id}`}>
-      <Link href={`/tags/${row.id}` as never} asChild>
+      <Link href={`/tags/${row.id}`} asChild>
         <Pressable accessibilityRole="link" accessibilityLabel={`${kind.word} on ${row.plantId}, ${row.state === 'overdue' ? 'past expiry' : expiryPhrase(row.expiresAt, now)}`} style={styles.open}>
           <View style={styles.top}>
             <MaterialCommunityIcons name={kind.icon} size={22} color={colors.ink} />

@@ -2,7 +2,7 @@ import { View } from 'react-native';
 import { space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { SelectField, type SelectOption } from '@/components/ui/select-field';
-import { TextField } from '@/components/ui/text-field';
+import { SearchField } from '@/components/ui/text-field';
 import { KIND_LOOK } from '@/components/tags/tag-vocabulary';
 import { BOARD_STATES, BOARD_STATE_LABELS, type BoardState } from '@/shared/rules/board';
 import { TAG_KINDS, type TagKind } from '@/shared/rules/tags';
@@ -33,16 +33,12 @@ export function BoardFilters({ value, onChange, sites, holders }: Props) {
   const basis = isWide ? 200 : 150;
   return (
     <View style={{ gap: space.xs }} nativeID="board-filters">
-      <TextField
+      <SearchField
         label="Search the board"
         hint="Plant ID, item name, reason or holder"
         value={value.q}
         onChangeText={(q) => set({ q })}
         placeholder="e.g. AHU-2 or seal"
-        autoCapitalize="none"
-        autoCorrect={false}
-        inputMode="search"
-        returnKeyType="search"
         testID="board-search"
       />
       <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm }}>

@@ -16,7 +16,7 @@ export const BOARD_STATE_LOOK: Record<BoardState, { tone: StateTone; icon: IconN
 };
 
 /** "tel:" address for a contact number: digits and a leading + only. */
-export const telHref = (phone: string) => `tel:${phone.replace(/[^0-9+]/g, '')}`;
+export const telHref = (phone: string): `tel:${string}` => `tel:${phone.replace(/[^0-9+]/g, '')}`;
 
 /** "14:05:09", the time the board was computed, on this device's clock. */
 export const clockTime = (iso: string | number) =>

@@ -4,10 +4,10 @@ import type { PlantRoomDiagram } from '@/shared/types/connections';
 
 export const NODE_SIZE = { width: 176, height: 80 } as const;
 
-export type DiagramItem = PlantRoomDiagram['items'][number];
+type DiagramItem = PlantRoomDiagram['items'][number];
 export interface PlacedItem { item: DiagramItem; x: number; y: number }
 export interface PlacedLink { id: number; medium: Medium; points: { x: number; y: number }[] }
-export interface DiagramLayout { items: PlacedItem[]; links: PlacedLink[]; width: number; height: number }
+interface DiagramLayout { items: PlacedItem[]; links: PlacedLink[]; width: number; height: number }
 
 /** Places items in layers from supplies down to what they feed (dagre's layered layout; loops are allowed). */
 export function layoutDiagram(d: PlantRoomDiagram): DiagramLayout {

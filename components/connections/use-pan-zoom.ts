@@ -1,7 +1,7 @@
 import { useMemo, useRef, useState } from 'react';
 import { PanResponder, type GestureResponderEvent } from 'react-native';
 
-export interface View2D { x: number; y: number; k: number }
+interface View2D { x: number; y: number; k: number }
 const MIN_SCALE = 0.15;
 const MAX_SCALE = 2.5;
 const clampK = (k: number) => Math.min(MAX_SCALE, Math.max(MIN_SCALE, k));

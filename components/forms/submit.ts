@@ -1,4 +1,4 @@
-import { prepareDataForValidation, setIn, type FormikErrors, type FormikHelpers } from 'formik';
+import { getIn, prepareDataForValidation, setIn, type FormikErrors, type FormikHelpers } from 'formik';
 import type { AnySchema } from 'yup';
 import { RequestError, errorMessage } from '@/hooks/api/request';
 import { validateFields } from '@/shared/schemas/field-errors';
@@ -9,35 +9,45 @@ export interface FormStatus {
   status: number;
   code: ErrorCode | 'unknown';
   message: string;
+  /** The refusal's field messages as the server named them. */
+  fields?: FieldErrors;
 }
 
 /**
  * Values as the shared schema should see them: Formik's own preparation (empty strings become undefined,
  * so optional fields take their schema defaults) — the same the form's validation runs on.
  */
-export const prepareValues = <T extends object>(values: T) => prepareDataForValidation(values as never) as T;
+export const prepareValues = <T extends object>(values: T) => prepareDataForValidation(values as Record<string, unknown>) as T;
 
 /** A form whose field names differ from the API's (a number typed in a unit) maps each API path to its own. */
 export type FieldPathMap = (apiPath: string) => string;
 
-/** Flat field messages (`attributes.capacityL`, `points[0].method`) as Formik's nested errors. */
+/**
+ * Flat field messages (`attributes.capacityL`, `points[0].method`) as Formik's nested errors. A message on a
+ * whole entry (`points[0]`) and one on its part (`points[0].method`) cannot both nest: the first one stays.
+ */
 export function nestErrors<T>(fields: FieldErrors, pathFor: FieldPathMap = (p) => p): FormikErrors<T> {
   let nested: FormikErrors<T> = {};
-  for (const [path, message] of Object.entries(fields)) nested = setIn(nested, pathFor(path), message);
+  for (const [apiPath, message] of Object.entries(fields)) {
+    const path = pathFor(apiPath);
+    const parts = path.split(/[.[\]]+/).filter(Boolean);
+    const taken = parts.some((_, i) => getIn(nested, parts.slice(0, i + 1)) !== undefined);
+    if (!taken) nested = setIn(nested, path, message);
+  }
   return nested;
 }
 
 /** A failure as a form status: the HTTP status (0 without an answer), the code and the server's words. */
 export function failureStatus(err: unknown): FormStatus {
   return err instanceof RequestError
-    ? { status: err.status, code: err.code, message: err.message }
+    ? { status: err.status, code: err.code, message: err.message, fields: err.fields }
     : { status: 0, code: 'unknown', message: errorMessage(err) };
 }
 
 type Helpers<T> = Pick<FormikHelpers<T>, 'setErrors' | 'setStatus'>;
 
 /** A failure into the form: field messages beside their fields, everything in the status banner. */
-export function applyFailure<T>(err: unknown, { setErrors, setStatus }: Helpers<T>, pathFor?: FieldPathMap) {
+function applyFailure<T>(err: unknown, { setErrors, setStatus }: Helpers<T>, pathFor?: FieldPathMap) {
   if (err instanceof RequestError && err.fields) setErrors(nestErrors<T>(err.fields, pathFor));
   setStatus(failureStatus(err));
 }
@@ -59,18 +69,10 @@ export async function submitForm<T, R>(helpers: Helpers<T>, action: () => Promis
 
 /**
  * A Formik `validate` from a shared schema, run on the body the server will get (`toBody`), with `context`
- * for rules that depend on the tag's kind or the actor's role. The server runs the same schema.
+ * for rules that depend on the tag's kind or the actor's role (a function when it holds the time now).
+ * The server runs the same schema.
  */
 export const validateWithSchema =
-  <T>(schema: AnySchema, toBody: (values: T) => unknown = (v) => v, context?: Record<string, unknown>) =>
+  <T>(schema: AnySchema, toBody: (values: T) => unknown = (v) => v, context?: Record<string, unknown> | (() => Record<string, unknown>)) =>
   async (values: T): Promise<FormikErrors<T>> =>
-    nestErrors<T>(await validateFields(schema, toBody(values), context));
-
-/** Errors worth showing: all of them once the person has tried to submit, before that only touched fields. */
-export function visibleErrors(errors: object, touched: Record<string, unknown>, submitCount: number): Record<string, string | undefined> {
-  const out: Record<string, string | undefined> = {};
-  for (const [k, v] of Object.entries(errors as Record<string, unknown>)) {
-    if (typeof v === 'string' && (submitCount > 0 || touched[k.split('.')[0]])) out[k] = v;
-  }
-  return out;
-}
+    nestErrors<T>(await validateFields(schema, toBody(values), typeof context === 'function' ? context() : context));

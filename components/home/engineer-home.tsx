@@ -1,5 +1,5 @@
 import { MaterialCommunityIcons } from '@expo/vector-icons';
-import { Link } from 'expo-router';
+import { Link, type Href } from 'expo-router';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, layout, radius, space } from '@/components/theme';
 import { Card } from '@/components/ui/card';
@@ -13,9 +13,9 @@ import { TagNoticesBanner } from '@/components/tags/tag-notices-banner';
 import type { RecentPlace } from '@/shared/types/visits';
 
 function PlaceRow({ place, now }: { place: RecentPlace; now: Date }) {
-  const href = place.type === 'site' ? `/sites/${place.id}` : `/plant-rooms/${place.id}`;
+  const href: Href = place.type === 'site' ? `/sites/${place.id}` : `/plant-rooms/${place.id}`;
   return (
-    <Link href={href as never} asChild>
+    <Link href={href} asChild>
       <Pressable style={styles.row} accessibilityRole="link" testID={`recent-${place.type}-${place.id}`}>
         <MaterialCommunityIcons name={place.type === 'site' ? 'office-building-outline' : 'door-open'} size={24} color={colors.ink} />
         <View style={{ flex: 1 }}>
@@ -45,7 +45,7 @@ export function EngineerHome() {
         </View>
       ) : null}
       {v ? (
-        <Link href={`/visits/${v.id}` as never} asChild>
+        <Link href={`/visits/${v.id}`} asChild>
           <Pressable style={styles.visit} accessibilityRole="link" testID="home-visit">
             <MaterialCommunityIcons name="account-hard-hat" size={30} color={colors.brandInk} />
             <View style={{ flex: 1 }}>

@@ -7,7 +7,8 @@ import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { EngineerHome } from '@/components/home/engineer-home';
-import { may, type RolePermission } from '@/shared/rules/permissions';
+import { usePermissions } from '@/hooks/auth/use-permissions';
+import type { RolePermission } from '@/shared/rules/permissions';
 import type { User } from '@/shared/types/user';
 
 interface Action {
@@ -27,20 +28,18 @@ const ACTIONS: Action[] = [
   { href: '/assets', title: 'Plant register', detail: ['Search sites, plant rooms and items.', 'Read-only view of sites and plant.'], icon: 'file-tree-outline', permission: 'viewRegister' },
 ];
 
-const HEADINGS: Record<User['role'], string> = {
-  engineer: 'On site today',
-  supervisor: 'Supervision',
-  admin: 'Supervision and team',
-  viewer: 'Overview',
-};
+// The heading says what the home is for, by the first of these the person may do.
+const HEADINGS: [RolePermission, string][] = [['administerTeam', 'Supervision and team'], ['superviseTags', 'Supervision'], ['raiseTag', 'On site today']];
 
 export function HomeContent({ user }: { user: User }) {
   const { isWide } = useBreakpoints();
-  const actions = ACTIONS.filter((a) => may(user, a.permission));
-  const acts = may(user, 'raiseTag');
+  const { may } = usePermissions();
+  const actions = ACTIONS.filter((a) => may(a.permission));
+  const acts = may('raiseTag');
+  const heading = HEADINGS.find(([p]) => may(p))?.[1] ?? 'Overview';
   return (
     <View style={{ gap: space.lg }} testID={`home-${user.role}`}>
-      <Text variant="title">{HEADINGS[user.role]}</Text>
+      <Text variant="title">{heading}</Text>
       <View style={[styles.grid, isWide && styles.gridWide]}>
         {actions.map((a) => (
           <Link key={a.title} href={a.href} asChild>
@@ -55,7 +54,7 @@ export function HomeContent({ user }: { user: User }) {
           </Link>
         ))}
       </View>
-      {may(user, 'recordVisits') ? <EngineerHome /> : null}
+      {may('recordVisits') ? <EngineerHome /> : null}
       {acts ? (
         <Notice tone="caution" title="Before you work on any plant">
           Isoledger records what has been isolated or overridden, by whom and why. It does not make anything safe. Follow the site's safe isolation procedure, isolate every energy source, lock and tag physically, and prove the isolation before work. Gas work only by a competent person registered as local law requires.

@@ -12,7 +12,7 @@ export function LabelLanding({ code }: { code: string }) {
   const router = useRouter();
   const label = useLabelQuery(code);
   useEffect(() => {
-    if (label.data) router.replace(`/assets/${label.data.id}` as never);
+    if (label.data) router.replace(`/assets/${label.data.id}`);
   }, [label.data, router]);
 
   if (label.isPending || label.data) return <LoadingView />;
@@ -26,8 +26,8 @@ export function LabelLanding({ code }: { code: string }) {
       ) : (
         <Notice tone="danger">{errorMessage(label.error)}</Notice>
       )}
-      <Link href={'/scan' as never}><Text bold>Scan another label</Text></Link>
-      <Link href={'/assets' as never}><Text bold>Search the register</Text></Link>
+      <Link href={'/scan'}><Text bold>Scan another label</Text></Link>
+      <Link href={'/assets'}><Text bold>Search the register</Text></Link>
     </Screen>
   );
 }

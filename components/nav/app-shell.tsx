@@ -29,7 +29,7 @@ export function AppShell({ user, children }: { user: User; children: ReactNode }
           {items.map((item) => {
             const active = isActive(pathname, item.href);
             return (
-              <Link key={item.href} href={item.href as never} asChild>
+              <Link key={item.href} href={item.href} asChild>
                 <Pressable style={StyleSheet.flatten([styles.sideItem, active && styles.sideItemActive])} accessibilityRole="link" accessibilityState={{ selected: active }}>
                   <MaterialCommunityIcons name={item.icon} size={24} color={active ? colors.ink : colors.paper} />
                   <Text bold={active} style={{ color: active ? colors.ink : colors.paper }}>{item.label}</Text>
@@ -55,7 +55,7 @@ export function AppShell({ user, children }: { user: User; children: ReactNode }
         {items.map((item) => {
           const active = isActive(pathname, item.href);
           return (
-            <Link key={item.href} href={item.href as never} asChild>
+            <Link key={item.href} href={item.href} asChild>
               <Pressable style={styles.tab} accessibilityRole="link" accessibilityState={{ selected: active }} accessibilityLabel={item.label}>
                 <View style={[styles.tabIcon, active && styles.tabIconActive]}>
                   <MaterialCommunityIcons name={item.icon} size={24} color={active ? colors.ink : colors.paper} />

@@ -24,7 +24,7 @@ function LiveTagRow({ tag, now }: { tag: Tag; now: Date }) {
   const zone = tag.asset.timeZone;
   return (
     <View style={styles.row} testID={`live-tag-${tag.id}`}>
-      <Link href={`/tags/${tag.id}` as never} asChild>
+      <Link href={`/tags/${tag.id}`} asChild>
         <Pressable style={styles.head} accessibilityRole="link" accessibilityLabel={`${kind.word} on ${tag.asset.plantId} ${tag.asset.name}: open the tag`}>
           <Badge tone={kind.tone === 'danger' ? 'danger' : 'caution'} icon={kind.icon} label={kind.word} />
           <Text bold style={{ flex: 1 }} numberOfLines={2}>{`${tag.asset.plantId} · ${tag.asset.name}`}</Text>

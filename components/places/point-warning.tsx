@@ -7,13 +7,13 @@ import { ISOLATION_METHOD_LABELS } from '@/shared/rules/tags';
 import type { Tag, TagPoint } from '@/shared/types/tags';
 
 /** The words every isolation point carries, wherever it is shown. */
-export const pointWarningText = (forPlantId: string, holderName: string) => `Do not operate — point of an isolation on ${forPlantId} held by ${holderName}`;
+const pointWarningText = (forPlantId: string, holderName: string) => `Do not operate — point of an isolation on ${forPlantId} held by ${holderName}`;
 
 /** An item used as an isolation point of a live tag: a danger line that opens the item. */
 export function PointWarning({ point, tag }: { point: TagPoint; tag: Tag }) {
   if (!point.asset) return null;
   return (
-    <Link href={`/assets/${point.asset.id}` as never} asChild>
+    <Link href={`/assets/${point.asset.id}`} asChild>
       <Pressable style={styles.box} accessibilityRole="link" testID={`point-warning-${point.asset.id}`}>
         <MaterialCommunityIcons name="hand-back-left-off" size={22} color={colors.danger} />
         <View style={{ flex: 1 }}>

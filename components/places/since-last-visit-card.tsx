@@ -14,7 +14,7 @@ function TagLines({ title, items, zone, now }: { title: string; items: TagActivi
     <View style={{ gap: space.xs }}>
       <Text bold>{`${title} (${items.length})`}</Text>
       {items.map((e, i) => (
-        <Link key={`${e.tagId}-${e.at}-${i}`} href={`/tags/${e.tagId}` as never}>
+        <Link key={`${e.tagId}-${e.at}-${i}`} href={`/tags/${e.tagId}`}>
           <Text variant="small">{`${e.item.plantId} ${e.item.name} · ${kindWord(e.kind)} · ${e.by.name} · ${formatInZone(e.at, zone, now)} — ${e.text ?? e.reason}`}</Text>
         </Link>
       ))}
@@ -28,7 +28,7 @@ function ReadingLines({ items, zone, now }: { items: ReadingActivity[]; zone: st
     <View style={{ gap: space.xs }}>
       <Text bold>{`Readings with flags (${items.length})`}</Text>
       {items.map((r) => (
-        <Link key={r.id} href={`/assets/${r.item.id}` as never}>
+        <Link key={r.id} href={`/assets/${r.item.id}`}>
           <Text variant="small">{`${r.item.plantId} ${r.item.name} · ${r.by.name} · ${formatInZone(r.takenAt, zone, now)} — ${r.flags.map((f) => f.message).join('; ')}`}</Text>
         </Link>
       ))}

@@ -11,7 +11,7 @@ export interface SeriesStyle {
 
 // Series differ by colour, dash and marker together, so they stay apart in greyscale and for
 // colour-blind readers. Red and yellow are left out: they mean danger and caution here.
-export const SERIES_STYLES: SeriesStyle[] = [
+const SERIES_STYLES: SeriesStyle[] = [
   { color: colors.brand, marker: 'circle' },
   { color: colors.mandatory, dash: '8 5', marker: 'square' },
   { color: '#6a3d9a', dash: '2 4', marker: 'triangle' },

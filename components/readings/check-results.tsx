@@ -19,7 +19,7 @@ export function CheckResults({ results, emptyText, testID }: { results: CheckRes
   );
 }
 
-export function CheckResultCard({ result, wide }: { result: CheckResult; wide?: boolean }) {
+function CheckResultCard({ result, wide }: { result: CheckResult; wide?: boolean }) {
   const shown = result.valueText ?? `${formatNumber(result.value, 3)}${result.unit ? ` ${result.unit}` : ''}`;
   return (
     <View style={[styles.card, wide && styles.cardWide]} testID={`check-${result.key}`} accessibilityLabel={`${result.label}: ${shown}`}>

@@ -7,7 +7,7 @@ import { initialVesselForm, vesselFormPath, vesselFormToRequest, type VesselForm
 import { GlycolChoice } from '@/components/readings/glycol-choice';
 import { ExpansionVesselResultView } from '@/components/readings/expansion-vessel-result';
 import { MarginChoice } from '@/components/readings/margin-choice';
-import { MeasurementField } from '@/components/readings/measurement-field';
+import { FormMeasurementField } from '@/components/readings/measurement-field';
 import { colors, layout, space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Button } from '@/components/ui/button';
@@ -58,22 +58,11 @@ export function ExpansionVesselForm({ initial, initialMarginBar }: { initial?: P
         if (checked) setCheckedJson(JSON.stringify(values));
       }}
     >
-      {({ values, errors, touched, setFieldValue, setFieldTouched, handleSubmit, isSubmitting, submitCount }) => {
+      {({ values, errors, touched, setFieldValue, handleSubmit, isSubmitting, submitCount }) => {
         const show = (path: string) => (submitCount > 0 || getIn(touched, path) ? (getIn(errors, path) as string | undefined) : undefined);
         const field = (name: keyof VesselFormValues, label: string, units: readonly { key: string; label: string }[], unitField?: keyof VesselFormValues, hint?: string) => (
           <View style={isWide ? styles.fieldWide : undefined}>
-            <MeasurementField
-              label={label}
-              hint={hint}
-              value={values[name] as string}
-              onChangeText={(t) => setFieldValue(name, t)}
-              onBlur={() => setFieldTouched(name, true)}
-              unit={unitField ? (values[unitField] as string) : units[0].key}
-              units={units}
-              onUnitChange={unitField ? (u) => setFieldValue(unitField, u) : undefined}
-              error={show(name)}
-              testID={`vessel-${name}`}
-            />
+            <FormMeasurementField label={label} hint={hint} entry={name} unitField={unitField} units={units} testID={`vessel-${name}`} />
           </View>
         );
         const stale = check.data && checkedJson !== null && checkedJson !== JSON.stringify(values);
@@ -100,18 +89,10 @@ export function ExpansionVesselForm({ initial, initialMarginBar }: { initial?: P
             </View>
             <View style={{ gap: space.sm, display: values.sizeOnly ? 'none' : 'flex' }}>
               <Text variant="label" bold>Installed vessels (nominal volume)</Text>
-              {values.vessels.map((v, i) => (
+              {values.vessels.map((_, i) => (
                 <View key={i} style={styles.vesselRow}>
                   <View style={{ flex: 1 }}>
-                    <MeasurementField
-                      label={`Vessel ${i + 1}`}
-                      value={v}
-                      onChangeText={(t) => setFieldValue(`vessels.${i}`, t)}
-                      unit="L"
-                      units={LITRES}
-                      error={show(`vessels.${i}`)}
-                      testID={`vessel-volume-${i}`}
-                    />
+                    <FormMeasurementField label={`Vessel ${i + 1}`} entry={`vessels.${i}`} units={LITRES} testID={`vessel-volume-${i}`} />
                   </View>
                   {values.vessels.length > 1 ? (
                     <Pressable onPress={() => setFieldValue('vessels', values.vessels.filter((_, j) => j !== i))} accessibilityRole="button" accessibilityLabel={`Remove vessel ${i + 1}`} style={styles.remove}>

@@ -5,7 +5,7 @@ import type { CheckFlagLevel } from '@/shared/calc';
 
 type IconName = ComponentProps<typeof MaterialCommunityIcons>['name'];
 
-export interface FlagStyle {
+interface FlagStyle {
   word: string;
   icon: IconName;
   bg: string;

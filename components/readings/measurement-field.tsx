@@ -1,6 +1,9 @@
+import { getIn, useFormikContext } from 'formik';
 import { Pressable, StyleSheet, TextInput, View } from 'react-native';
-import { colors, fonts, layout, radius, space, type as typeScale } from '@/components/theme';
+import { useFieldError } from '@/components/forms/bound-fields';
+import { colors, layout, radius, space } from '@/components/theme';
 import { Text } from '@/components/ui/text';
+import { FieldFrame, inputStyle } from '@/components/ui/text-field';
 
 export interface UnitOption {
   key: string;
@@ -22,12 +25,10 @@ interface Props {
 }
 
 /** A number with its unit: the unit is a choice beside the box when more than one is offered. */
-export function MeasurementField({ label, value, onChangeText, onBlur, unit, units, onUnitChange, hint, error, placeholder, testID }: Props) {
+function MeasurementField({ label, value, onChangeText, onBlur, unit, units, onUnitChange, hint, error, placeholder, testID }: Props) {
   const single = units.length <= 1;
   return (
-    <View style={styles.wrap}>
-      <Text variant="label" bold nativeID={testID ? `${testID}-label` : undefined}>{label}</Text>
-      {hint ? <Text variant="small" muted>{hint}</Text> : null}
+    <FieldFrame label={label} hint={hint} error={error} labelID={testID ? `${testID}-label` : undefined}>
       <View style={styles.row}>
         <TextInput
           value={value}
@@ -39,7 +40,7 @@ export function MeasurementField({ label, value, onChangeText, onBlur, unit, uni
           placeholder={placeholder}
           placeholderTextColor={colors.inkMuted}
           testID={testID}
-          style={[styles.input, error ? styles.inputError : null]}
+          style={[...inputStyle(error), styles.input]}
         />
         {single ? (
           <View style={styles.fixedUnit}><Text bold>{units[0]?.label ?? unit}</Text></View>
@@ -64,34 +65,36 @@ export function MeasurementField({ label, value, onChangeText, onBlur, unit, uni
           </View>
         )}
       </View>
-      {error ? (
-        <Text variant="small" style={styles.error} accessibilityLiveRegion="polite">⚠ {error}</Text>
-      ) : null}
-    </View>
+    </FieldFrame>
+  );
+}
+
+type BoundProps = Omit<Props, 'value' | 'onChangeText' | 'onBlur' | 'unit' | 'onUnitChange' | 'error'> & { entry: string; unitField?: string };
+
+/** A measurement bound to a form: the typed text at `entry`, the chosen unit at `unitField` (or the only unit offered). */
+export function FormMeasurementField({ entry, unitField, units, ...rest }: BoundProps) {
+  const { values, handleChange, setFieldTouched, setFieldValue } = useFormikContext();
+  const unit = unitField ? (getIn(values, unitField) as string) : units[0]?.key ?? '';
+  return (
+    <MeasurementField
+      value={(getIn(values, entry) as string | undefined) ?? ''}
+      onChangeText={handleChange(entry)}
+      onBlur={() => void setFieldTouched(entry, true)}
+      unit={unit}
+      units={units}
+      onUnitChange={unitField ? (u) => void setFieldValue(unitField, u) : undefined}
+      error={useFieldError(entry)}
+      {...rest}
+    />
   );
 }
 
 const styles = StyleSheet.create({
-  wrap: { gap: space.xs, marginBottom: space.md },
   row: { flexDirection: 'row', alignItems: 'stretch', gap: space.sm },
-  input: {
-    ...typeScale.body,
-    fontFamily: fonts.regular,
-    flex: 1,
-    minWidth: 0,
-    minHeight: layout.minTouch + 4,
-    borderWidth: 2,
-    borderColor: colors.line,
-    borderRadius: radius.md,
-    backgroundColor: colors.surface,
-    paddingHorizontal: space.md,
-    color: colors.ink,
-  },
-  inputError: { borderColor: colors.danger },
+  input: { flex: 1, minWidth: 0 },
   fixedUnit: { minWidth: layout.minTouch + 8, justifyContent: 'center', alignItems: 'center' },
   segments: { flexDirection: 'row', borderWidth: 2, borderColor: colors.ink, borderRadius: radius.md, overflow: 'hidden' },
   segment: { minWidth: layout.minTouch + 8, minHeight: layout.minTouch, paddingHorizontal: space.sm, justifyContent: 'center', alignItems: 'center', backgroundColor: colors.surface },
   segmentDivider: { borderLeftWidth: 1, borderLeftColor: colors.line },
   segmentSelected: { backgroundColor: colors.brand },
-  error: { color: colors.danger },
 });

@@ -1,10 +1,14 @@
 // The reading form's fields: what each measures, the units offered, and the
 // conversion between what was typed and the SI values the API stores.
-import { formatNumber, fromSi, INHIBITOR_LABELS, toSi, UNIT_OPTIONS, WATER_APPEARANCE_LABELS, type PhysicalQuantity } from '@/shared/calc';
+import { setIn, type FormikErrors } from 'formik';
+import type { AnySchema } from 'yup';
+import { nestErrors, type FieldPathMap } from '@/components/forms/submit';
+import { formatNumber, fromSi, INHIBITOR_LABELS, toSi, UNIT_OPTIONS, WATER_APPEARANCE_LABELS, type PhysicalQuantity, type UnitKey } from '@/shared/calc';
 import { READING_CHOICE_KEYS, READING_NUMBER_KEYS, type ReadingChoiceKey, type ReadingNumberKey } from '@/shared/rules/reading-keys';
+import { validateFields } from '@/shared/schemas/field-errors';
 import type { ReadingValues } from '@/shared/types/readings';
 
-export interface MeasurementDef<K extends string = string> {
+interface MeasurementDef<K extends string = string> {
   key: K;
   label: string;
   quantity: PhysicalQuantity;
@@ -40,7 +44,7 @@ export const READING_FIELD_DEFS: Record<ReadingNumberKey, MeasurementDef<Reading
 };
 
 /** Every numeric field, in the order of the API keys. */
-export const READING_FIELDS: MeasurementDef<ReadingNumberKey>[] = READING_NUMBER_KEYS.map((k) => READING_FIELD_DEFS[k]);
+const READING_FIELDS: MeasurementDef<ReadingNumberKey>[] = READING_NUMBER_KEYS.map((k) => READING_FIELD_DEFS[k]);
 
 export const CHOICE_FIELD_DEFS: Record<ReadingChoiceKey, { label: string; options: Record<string, string> }> = {
   inhibitorResult: { label: 'Inhibitor (test kit)', options: INHIBITOR_LABELS },
@@ -49,10 +53,10 @@ export const CHOICE_FIELD_DEFS: Record<ReadingChoiceKey, { label: string; option
 
 export const isChoiceKey = (key: string): key is ReadingChoiceKey => (READING_CHOICE_KEYS as readonly string[]).includes(key);
 
-export type UnitChoice = Record<string, string>;
+type UnitChoice = Record<string, string>;
 
 export const defaultUnit = (quantity: PhysicalQuantity): string => UNIT_OPTIONS[quantity][0].key;
-export const unitLabel = (quantity: PhysicalQuantity, unit: string): string =>
+const unitLabel = (quantity: PhysicalQuantity, unit: string): string =>
   (UNIT_OPTIONS[quantity] as readonly { key: string; label: string }[]).find((u) => u.key === unit)?.label ?? unit;
 
 /** Reads a typed number; a decimal comma is accepted. Empty → null; not a number → NaN. */
@@ -67,13 +71,13 @@ export function parseEntry(text: string): number | null {
 export function entryToSi(text: string, quantity: PhysicalQuantity, unit: string): number | null {
   const n = parseEntry(text);
   if (n === null || Number.isNaN(n)) return n;
-  return toSi(quantity, unit as never, n);
+  return toSi(quantity, unit as UnitKey<PhysicalQuantity>, n);
 }
 
 /** An SI value → text in a unit, for prefilling a form. */
 export function siToEntry(value: number | null | undefined, quantity: PhysicalQuantity, unit: string): string {
   if (value === null || value === undefined) return '';
-  return formatNumber(fromSi(quantity, unit as never, value), 5);
+  return formatNumber(fromSi(quantity, unit as UnitKey<PhysicalQuantity>, value), 5);
 }
 
 export interface ReadingFormValues {
@@ -114,7 +118,7 @@ export function readingFormToSi(values: ReadingFormValues): { body: Record<strin
     if (Number.isNaN(si)) unreadable[`entries.${f.key}`] = 'Enter a number.';
     body[f.key] = Number.isNaN(si) ? null : si;
   }
-  for (const k of READING_CHOICE_KEYS) body[k] = values.choices?.[k] ?? null;
+  for (const k of READING_CHOICE_KEYS) body[k] = values.choices?.[k] || null; // '' when a choice is cleared
   body.surfaceTemperatures = values.surfaceTemperatures.map((s, i) => {
     const t = parseEntry(s.temperatureC);
     if (Number.isNaN(t)) unreadable[`surfaceTemperatures.${i}.temperatureC`] = 'Enter a number.';
@@ -141,7 +145,7 @@ export function describeValues(values: ReadingValues): { label: string; text: st
     if (v === null || v === undefined) continue;
     const unit = defaultUnit(f.quantity);
     const label = unitLabel(f.quantity, unit);
-    out.push({ label: f.label, text: `${formatNumber(fromSi(f.quantity, unit as never, v), 4)}${label === 'pH' ? '' : ` ${label}`}` });
+    out.push({ label: f.label, text: `${formatNumber(fromSi(f.quantity, unit as UnitKey<PhysicalQuantity>, v), 4)}${label === 'pH' ? '' : ` ${label}`}` });
   }
   for (const k of READING_CHOICE_KEYS) {
     const v = values[k];
@@ -149,4 +153,14 @@ export function describeValues(values: ReadingValues): { label: string; text: st
   }
   for (const s of values.surfaceTemperatures) out.push({ label: s.location, text: `${formatNumber(s.temperatureC, 4)} °C` });
   return out;
+}
+
+/**
+ * A form of typed measurements checked as the server checks it: the shared schema on the SI body, each message
+ * put on the form's own field, and entries that are not numbers named too.
+ */
+export async function validateMeasurements<T>(schema: AnySchema, { body, unreadable }: { body: unknown; unreadable: Record<string, string> }, pathFor: FieldPathMap): Promise<FormikErrors<T> & { _?: string }> {
+  let errors = nestErrors<T>(await validateFields(schema, body), pathFor);
+  for (const [path, message] of Object.entries(unreadable)) errors = setIn(errors, path, message);
+  return errors;
 }

@@ -1,11 +1,10 @@
-import { getIn, useFormikContext } from 'formik';
 import { StyleSheet, View } from 'react-native';
-import { MeasurementField } from '@/components/readings/measurement-field';
-import { CHOICE_FIELD_DEFS, isChoiceKey, READING_FIELD_DEFS, type ReadingFormValues } from '@/components/readings/reading-fields';
+import { FormSelectField } from '@/components/forms/bound-fields';
+import { FormMeasurementField } from '@/components/readings/measurement-field';
+import { CHOICE_FIELD_DEFS, isChoiceKey, READING_FIELD_DEFS } from '@/components/readings/reading-fields';
 import { space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Notice } from '@/components/ui/notice';
-import { SelectField } from '@/components/ui/select-field';
 import { Text } from '@/components/ui/text';
 import { GAS_WORK_CAUTION, UNIT_OPTIONS } from '@/shared/calc';
 import type { ReadingSection } from '@/shared/rules/reading-sections';
@@ -13,8 +12,6 @@ import type { ReadingSection } from '@/shared/rules/reading-sections';
 /** One section of the reading form (gas, flue gas, hot water …): its fields, bound to the form. */
 export function ReadingSectionFields({ section }: { section: ReadingSection }) {
   const { isWide } = useBreakpoints();
-  const { values, errors, touched, submitCount, setFieldValue, setFieldTouched } = useFormikContext<ReadingFormValues>();
-  const show = (path: string) => (submitCount > 0 || getIn(touched, path) ? (getIn(errors, path) as string | undefined) : undefined);
   return (
     <View style={{ gap: space.xs }} testID={`reading-section-${section.key}`}>
       <Text variant="title">{section.title}</Text>
@@ -25,14 +22,12 @@ export function ReadingSectionFields({ section }: { section: ReadingSection }) {
             const def = CHOICE_FIELD_DEFS[key];
             return (
               <View key={key} style={isWide ? styles.fieldWide : styles.choice}>
-                <SelectField
+                <FormSelectField
+                  name={`choices.${key}`}
                   label={def.label}
-                  value={values.choices[key]}
                   options={Object.entries(def.options).map(([value, label]) => ({ value, label }))}
-                  onChange={(v) => setFieldValue(`choices.${key}`, v)}
                   placeholder="Not tested"
                   clearable
-                  error={show(`choices.${key}`)}
                   testID={`reading-${key}`}
                 />
               </View>
@@ -41,18 +36,7 @@ export function ReadingSectionFields({ section }: { section: ReadingSection }) {
           const f = READING_FIELD_DEFS[key];
           return (
             <View key={key} style={isWide ? styles.fieldWide : undefined}>
-              <MeasurementField
-                label={f.label}
-                hint={f.hint}
-                value={values.entries[key]}
-                onChangeText={(t) => setFieldValue(`entries.${key}`, t)}
-                onBlur={() => setFieldTouched(`entries.${key}`, true)}
-                unit={values.units[key]}
-                units={UNIT_OPTIONS[f.quantity]}
-                onUnitChange={(u) => setFieldValue(`units.${key}`, u)}
-                error={show(`entries.${key}`)}
-                testID={`reading-${key}`}
-              />
+              <FormMeasurementField label={f.label} hint={f.hint} entry={`entries.${key}`} unitField={`units.${key}`} units={UNIT_OPTIONS[f.quantity]} testID={`reading-${key}`} />
             </View>
           );
         })}

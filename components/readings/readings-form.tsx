@@ -1,11 +1,11 @@
-import { Formik, getIn, setIn, type FormikErrors } from 'formik';
+import { Formik, type FormikErrors } from 'formik';
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import type { AnyObjectSchema } from 'yup';
 import { FormStatusBanner } from '@/components/forms/status-banner';
-import { nestErrors, submitForm } from '@/components/forms/submit';
+import { FormTextField } from '@/components/forms/bound-fields';
+import { submitForm } from '@/components/forms/submit';
 import { CheckResults } from '@/components/readings/check-results';
-import { formPathFor, initialReadingForm, readingFormToSi, type ReadingFormValues } from '@/components/readings/reading-fields';
+import { formPathFor, initialReadingForm, readingFormToSi, validateMeasurements, type ReadingFormValues } from '@/components/readings/reading-fields';
 import { ReadingSectionFields } from '@/components/readings/reading-section-fields';
 import { SurfaceTemperaturesField } from '@/components/readings/surface-temperatures-field';
 import { layout, space } from '@/components/theme';
@@ -13,24 +13,14 @@ import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
 import { useCorrectReadingMutation, useLogReadingsMutation } from '@/hooks/api/use-readings';
 import { READING_SECTIONS, readingSectionsFor } from '@/shared/rules/reading-sections';
 import { emptyReadingValues, runReadingChecks } from '@/shared/rules/readings';
-import { validateFields } from '@/shared/schemas/field-errors';
 import { readingCorrectionSchema, readingSetSchema, type ReadingCorrectionInput, type ReadingSetInput } from '@/shared/schemas/readings';
 import type { CheckSettings, ReadingSet, ReadingValues } from '@/shared/types/readings';
 import type { Asset } from '@/shared/types/register';
 
 type Errors = FormikErrors<ReadingFormValues> & { _?: string };
-
-/** The shared schema on the SI body, as the server runs it; entries that are not numbers are named too. */
-async function validateReadings(values: ReadingFormValues, schema: AnyObjectSchema): Promise<Errors> {
-  const { body, unreadable } = readingFormToSi(values);
-  let errors: Errors = nestErrors<ReadingFormValues>(await validateFields(schema, body), formPathFor);
-  for (const [path, message] of Object.entries(unreadable)) errors = setIn(errors, path, message);
-  return errors;
-}
 
 /** Readings typed so far as SI values; unreadable entries count as not read. */
 function liveValues(values: ReadingFormValues): ReadingValues {
@@ -62,7 +52,7 @@ export function ReadingsForm({ asset, checkSettings, correcting, onDone, onCance
   return (
     <Formik<ReadingFormValues>
       initialValues={initialValues}
-      validate={(values) => validateReadings(values, schema)}
+      validate={(values) => validateMeasurements<ReadingFormValues>(schema, readingFormToSi(values), formPathFor)}
       onSubmit={async (values, helpers) => {
         const { body } = readingFormToSi(values);
         const saved = await submitForm(
@@ -73,9 +63,8 @@ export function ReadingsForm({ asset, checkSettings, correcting, onDone, onCance
         if (saved) onDone(saved);
       }}
     >
-      {({ values, errors, touched, setFieldValue, setFieldTouched, handleSubmit, isSubmitting, submitCount }) => {
+      {({ values, errors, handleSubmit, isSubmitting, submitCount }) => {
         const errs = errors as Errors;
-        const show = (path: string) => (submitCount > 0 || getIn(touched, path) ? (getIn(errs, path) as string | undefined) : undefined);
         let live: ReturnType<typeof runReadingChecks> | null = null;
         try {
           live = runReadingChecks(liveValues(values), checkSettings);
@@ -100,26 +89,8 @@ export function ReadingsForm({ asset, checkSettings, correcting, onDone, onCance
               />
             ) : null}
             <SurfaceTemperaturesField showErrors={submitCount > 0} />
-            <TextField
-              label="Note"
-              value={values.note}
-              onChangeText={(t) => setFieldValue('note', t)}
-              multiline
-              numberOfLines={3}
-              style={{ minHeight: layout.minTouch * 2, paddingTop: space.sm, textAlignVertical: 'top' }}
-              error={show('note')}
-              testID="reading-note"
-            />
-            {correcting ? (
-              <TextField
-                label="What was wrong with the original"
-                value={values.reason}
-                onChangeText={(t) => setFieldValue('reason', t)}
-                onBlur={() => setFieldTouched('reason', true)}
-                error={show('reason')}
-                testID="reading-reason"
-              />
-            ) : null}
+            <FormTextField name="note" label="Note" multiline style={{ minHeight: layout.minTouch * 2 }} testID="reading-note" />
+            {correcting ? <FormTextField name="reason" label="What was wrong with the original" testID="reading-reason" /> : null}
             <View style={{ gap: space.sm }}>
               <Text variant="title">Checks as you type</Text>
               <Text variant="small" muted>The server runs the same checks again when the set is saved.</Text>

@@ -2,9 +2,10 @@ import { MaterialCommunityIcons } from '@expo/vector-icons';
 import { getIn, useFormikContext } from 'formik';
 import { Pressable, StyleSheet, TextInput, View } from 'react-native';
 import type { ReadingFormValues } from '@/components/readings/reading-fields';
-import { colors, fonts, layout, radius, space, type as typeScale } from '@/components/theme';
+import { colors, layout, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
+import { inputStyle } from '@/components/ui/text-field';
 import { MAX_SURFACE_TEMPERATURES } from '@/shared/schemas/readings';
 
 /** Spot temperatures taken on surfaces (e.g. with an infrared thermometer): where, and how hot. */
@@ -31,7 +32,7 @@ export function SurfaceTemperaturesField({ showErrors }: { showErrors: boolean }
                 placeholderTextColor={colors.inkMuted}
                 accessibilityLabel={`Surface ${i + 1} location`}
                 testID={`surface-${i}-location`}
-                style={[styles.input, styles.location, locationError ? styles.inputError : null]}
+                style={[...inputStyle(locationError), styles.location]}
               />
               <TextInput
                 value={row.temperatureC}
@@ -41,7 +42,7 @@ export function SurfaceTemperaturesField({ showErrors }: { showErrors: boolean }
                 inputMode="decimal"
                 accessibilityLabel={`Surface ${i + 1} temperature in °C`}
                 testID={`surface-${i}-temperature`}
-                style={[styles.input, styles.temperature, tempError ? styles.inputError : null]}
+                style={[...inputStyle(tempError), styles.temperature]}
               />
               <Text bold>°C</Text>
               <Pressable onPress={() => remove(i)} accessibilityRole="button" accessibilityLabel={`Remove surface ${i + 1}`} style={styles.remove}>
@@ -70,19 +71,7 @@ const styles = StyleSheet.create({
   wrap: { gap: space.sm, marginBottom: space.md },
   rowWrap: { gap: space.xs },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
-  input: {
-    ...typeScale.body,
-    fontFamily: fonts.regular,
-    minHeight: layout.minTouch + 4,
-    borderWidth: 2,
-    borderColor: colors.line,
-    borderRadius: radius.md,
-    backgroundColor: colors.surface,
-    paddingHorizontal: space.md,
-    color: colors.ink,
-  },
   location: { flex: 1, minWidth: 0 },
   temperature: { width: layout.minTouch + 28 },
-  inputError: { borderColor: colors.danger },
   remove: { minWidth: layout.minTouch, minHeight: layout.minTouch, alignItems: 'center', justifyContent: 'center' },
 });

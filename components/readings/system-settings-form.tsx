@@ -1,10 +1,9 @@
-import { Formik, setIn, type FormikErrors } from 'formik';
+import { Formik, type FormikErrors } from 'formik';
 import { StyleSheet, View } from 'react-native';
-import { ValidationError } from 'yup';
 import { GlycolChoice } from '@/components/readings/glycol-choice';
 import { MarginChoice } from '@/components/readings/margin-choice';
-import { MeasurementField, type UnitOption } from '@/components/readings/measurement-field';
-import { defaultUnit, entryToSi, parseEntry, siToEntry } from '@/components/readings/reading-fields';
+import { FormMeasurementField, type UnitOption } from '@/components/readings/measurement-field';
+import { defaultUnit, entryToSi, parseEntry, siToEntry, validateMeasurements } from '@/components/readings/reading-fields';
 import { space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Button } from '@/components/ui/button';
@@ -81,18 +80,7 @@ export function SystemSettingsForm({ system, onDone }: { system: HeatingSystem; 
   return (
     <Formik<Values>
       initialValues={initial(system)}
-      validate={async (values) => {
-        const { body, unreadable } = toBody(values);
-        let errors: FormikErrors<Values> & { _?: string } = {};
-        try {
-          await heatingSystemSchema.validate(body, { abortEarly: false });
-        } catch (err) {
-          if (!(err instanceof ValidationError)) throw err;
-          for (const e of err.inner.length ? err.inner : [err]) errors = setIn(errors, formPath(e.path ?? ''), e.message);
-        }
-        for (const [p, m] of Object.entries(unreadable)) errors = setIn(errors, p, m);
-        return errors;
-      }}
+      validate={(values) => validateMeasurements<Values>(heatingSystemSchema, toBody(values), formPath)}
       onSubmit={async (values, helpers) => {
         const saved = await submitForm(helpers, () => save.mutateAsync({ name: system.name, input: toBody(values).body }), formPath);
         if (saved) onDone();
@@ -105,17 +93,7 @@ export function SystemSettingsForm({ system, onDone }: { system: HeatingSystem; 
             <View style={[isWide && styles.wide]}>
               {FIELDS.map((f) => (
                 <View key={f.key} style={isWide ? styles.fieldWide : undefined}>
-                  <MeasurementField
-                    label={f.label}
-                    hint={f.hint}
-                    value={values.entries[f.key]}
-                    onChangeText={(t) => setFieldValue(`entries.${f.key}`, t)}
-                    unit={values.units[f.key]}
-                    units={f.quantity ? UNIT_OPTIONS[f.quantity] : KELVIN}
-                    onUnitChange={(u) => setFieldValue(`units.${f.key}`, u)}
-                    error={submitCount > 0 && errs.entries?.[f.key]}
-                    testID={`system-${f.key}`}
-                  />
+                  <FormMeasurementField label={f.label} hint={f.hint} entry={`entries.${f.key}`} unitField={`units.${f.key}`} units={f.quantity ? UNIT_OPTIONS[f.quantity] : KELVIN} testID={`system-${f.key}`} />
                 </View>
               ))}
             </View>

@@ -7,7 +7,7 @@ export type TrendGroupKey =
   | 'temperature' | 'delta-t' | 'pressure' | 'flow' | 'heat' | 'pump-head'
   | 'gas-pressure' | 'flue-gas' | 'flue-co' | 'flue-ratio' | 'flue-temperature' | 'efficiency' | 'ph' | 'conductivity';
 
-export interface TrendGroup {
+interface TrendGroup {
   key: TrendGroupKey;
   label: string;
   unit: string;

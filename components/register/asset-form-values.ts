@@ -23,7 +23,7 @@ export interface AssetFormValues {
   attributes: Record<string, string>;
 }
 
-export interface AttributeField {
+interface AttributeField {
   key: string;
   kind: 'number' | 'text' | 'choice';
   options: string[];
@@ -40,7 +40,7 @@ export function attributeFields(type: AssetType | ''): AttributeField[] {
 }
 
 /** assetSchema with `attributes` checked by the chosen type's schema. */
-export function schemaFor(type: AssetType | '') {
+function schemaFor(type: AssetType | '') {
   return type ? assetSchema.shape({ attributes: attributeSchemas[type] }) : assetSchema;
 }
 

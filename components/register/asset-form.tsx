@@ -1,7 +1,6 @@
 import { Formik, getIn, type FormikHelpers } from 'formik';
 import { View } from 'react-native';
 import { space } from '@/components/theme';
-import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { SelectField } from '@/components/ui/select-field';
@@ -10,6 +9,7 @@ import { AssetAttributeFields } from '@/components/register/asset-attribute-fiel
 import { toAssetInput, validateAssetForm, type AssetFormValues } from '@/components/register/asset-form-values';
 import { EnergyToggles } from '@/components/register/energy-chips';
 import { FormTextField } from '@/components/forms/bound-fields';
+import { FormButtons } from '@/components/forms/form-buttons';
 import { FormStatusBanner } from '@/components/forms/status-banner';
 import { submitForm } from '@/components/forms/submit';
 import { formatDate } from '@/components/register/register-vocabulary';
@@ -26,7 +26,6 @@ interface Props {
 }
 
 const TYPE_OPTIONS = ASSET_TYPES.map((t) => ({ value: t, label: ASSET_TYPE_LABELS[t] }));
-const multiline = { multiline: true, numberOfLines: 4, style: { minHeight: 104, paddingTop: space.sm, textAlignVertical: 'top' as const } };
 
 /** One form for adding and editing a plant item; the most-used fields first for a quick walk-round. */
 export function AssetForm({ initialValues, submitLabel, onSubmit, onCancel }: Props) {
@@ -65,12 +64,9 @@ export function AssetForm({ initialValues, submitLabel, onSubmit, onCancel }: Pr
               {due ? <Text muted>{`Next service due ${formatDate(due)}`}</Text> : null}
             </Card>
             <Card>
-              <FormTextField name="notes" label="Notes" {...multiline} />
+              <FormTextField name="notes" label="Notes" multiline numberOfLines={4} style={{ minHeight: 104 }} />
             </Card>
-            <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm }}>
-              <Button title={submitLabel} onPress={() => handleSubmit()} busy={isSubmitting} testID="asset-submit" />
-              <Button title="Cancel" variant="secondary" onPress={onCancel} />
-            </View>
+            <FormButtons submitTitle={submitLabel} busy={isSubmitting} onSubmit={() => handleSubmit()} onCancel={onCancel} submitFirst testID="asset" />
           </View>
         );
       }}

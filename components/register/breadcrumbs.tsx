@@ -1,18 +1,23 @@
 import { MaterialCommunityIcons } from '@expo/vector-icons';
-import { Link } from 'expo-router';
+import { Link, type Href } from 'expo-router';
 import { Fragment } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, layout, space } from '@/components/theme';
 import { Text } from '@/components/ui/text';
 
+export interface Crumb {
+  label: string;
+  href: Href & string;
+}
+
 /** Where this record sits: Register › site › plant room, each a link back up. */
-export function Breadcrumbs({ trail }: { trail: { label: string; href: string }[] }) {
+export function Breadcrumbs({ trail }: { trail: Crumb[] }) {
   return (
     <View style={styles.row} aria-label="Breadcrumbs" testID="breadcrumbs">
       {trail.map((t, i) => (
         <Fragment key={t.href}>
           {i > 0 ? <MaterialCommunityIcons name="chevron-right" size={20} color={colors.inkMuted} /> : null}
-          <Link href={t.href as never} style={styles.link}>
+          <Link href={t.href} style={styles.link}>
             <Text variant="small" bold style={{ color: colors.brand, textDecorationLine: 'underline' }}>{t.label}</Text>
           </Link>
         </Fragment>

@@ -2,11 +2,11 @@ import { MaterialCommunityIcons } from '@expo/vector-icons';
 import { Formik, getIn } from 'formik';
 import { View } from 'react-native';
 import { colors, space } from '@/components/theme';
-import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { SelectField } from '@/components/ui/select-field';
 import { Text } from '@/components/ui/text';
 import { FormTextField } from '@/components/forms/bound-fields';
+import { FormButtons } from '@/components/forms/form-buttons';
 import { FormStatusBanner } from '@/components/forms/status-banner';
 import { prepareValues, submitForm } from '@/components/forms/submit';
 import { SAFETY_LOCATIONS } from '@/components/register/register-vocabulary';
@@ -30,7 +30,6 @@ const initialFrom = (room: PlantRoom | undefined, siteId: number | null): Values
   safety: room?.safety ?? { emergencyStop: '', gasIsolation: '', electricalIsolator: '', firstAid: '', exits: '' },
 });
 
-const multiline = { multiline: true, numberOfLines: 3, style: { minHeight: 88, paddingTop: space.sm, textAlignVertical: 'top' as const } };
 
 export function PlantRoomForm({ room, siteId, submitLabel, onSubmit, onCancel }: { room?: PlantRoom; siteId: number | null; submitLabel: string; onSubmit: (input: PlantRoomInput) => Promise<unknown>; onCancel: () => void }) {
   const sites = useSitesQuery();
@@ -57,7 +56,7 @@ export function PlantRoomForm({ room, siteId, submitLabel, onSubmit, onCancel }:
             />
             <FormTextField name="name" label="Plant room name" placeholder="e.g. Basement boiler room" />
             <FormTextField name="floorArea" label="Floor or area" placeholder="e.g. Level B1, east core" />
-            <FormTextField name="accessNotes" label="Access notes" hint="Keys, codes held by, permits needed, restricted hours" {...multiline} />
+            <FormTextField name="accessNotes" label="Access notes" hint="Keys, codes held by, permits needed, restricted hours" multiline />
           </Card>
           <Card>
             <Text variant="title">Safety-critical locations</Text>
@@ -71,10 +70,7 @@ export function PlantRoomForm({ room, siteId, submitLabel, onSubmit, onCancel }:
               </View>
             ))}
           </Card>
-          <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm }}>
-            <Button title={submitLabel} onPress={() => handleSubmit()} busy={isSubmitting} testID="plant-room-submit" />
-            <Button title="Cancel" variant="secondary" onPress={onCancel} />
-          </View>
+          <FormButtons submitTitle={submitLabel} busy={isSubmitting} onSubmit={() => handleSubmit()} onCancel={onCancel} submitFirst testID="plant-room" />
         </View>
       )}
     </Formik>

@@ -3,7 +3,7 @@ import { space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Chip } from '@/components/ui/chip';
 import { SelectField } from '@/components/ui/select-field';
-import { TextField } from '@/components/ui/text-field';
+import { SearchField } from '@/components/ui/text-field';
 import { useSitesQuery } from '@/hooks/api/use-sites';
 import { ASSET_TYPES, ASSET_TYPE_LABELS, type AssetType } from '@/shared/rules/register';
 
@@ -23,16 +23,12 @@ export function RegisterFilters({ value, onChange, showArchivedToggle }: { value
   const set = (patch: Partial<RegisterFilterState>) => onChange({ ...value, ...patch });
   return (
     <View style={{ gap: space.sm }}>
-      <TextField
+      <SearchField
         label="Search the register"
         hint="Plant ID, name, system, serial number, site or room"
         value={value.q}
         onChangeText={(q) => set({ q })}
         placeholder="e.g. boiler 2 or P-HW-01"
-        autoCapitalize="none"
-        autoCorrect={false}
-        inputMode="search"
-        returnKeyType="search"
         testID="register-search"
       />
       <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'center' }}>

@@ -60,7 +60,7 @@ export const ATTRIBUTE_META: Record<string, { label: string; unit?: string; hint
   ways: { label: 'Number of ways' },
 };
 
-export const OPTION_LABELS: Record<string, string> = {
+const OPTION_LABELS: Record<string, string> = {
   'natural-gas': 'Natural gas',
   lpg: 'LPG',
   oil: 'Oil',

@@ -1,10 +1,10 @@
 import { Formik } from 'formik';
 import { View } from 'react-native';
 import { space } from '@/components/theme';
-import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import { FormTextField } from '@/components/forms/bound-fields';
+import { FormButtons } from '@/components/forms/form-buttons';
 import { FormStatusBanner } from '@/components/forms/status-banner';
 import { prepareValues, submitForm } from '@/components/forms/submit';
 import { siteSchema, type SiteInput } from '@/shared/schemas/register';
@@ -34,7 +34,7 @@ export function SiteForm({ site, submitLabel, onSubmit, onCancel }: { site?: Sit
           <Card>
             <Text variant="title">Site</Text>
             <FormTextField name="name" label="Site name" />
-            <FormTextField name="address" label="Address" multiline numberOfLines={3} style={{ minHeight: 96, paddingTop: space.sm, textAlignVertical: 'top' }} />
+            <FormTextField name="address" label="Address" multiline style={{ minHeight: 96 }} />
             <FormTextField name="timeZone" label="Time zone" hint="Region and city, e.g. Europe/London or America/New_York" autoCapitalize="none" autoCorrect={false} />
           </Card>
           <Card>
@@ -43,10 +43,7 @@ export function SiteForm({ site, submitLabel, onSubmit, onCancel }: { site?: Sit
             <FormTextField name="clientContactPhone" label="Phone" inputMode="tel" autoComplete="off" />
             <FormTextField name="clientContactEmail" label="E-mail" inputMode="email" autoCapitalize="none" autoComplete="off" />
           </Card>
-          <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm }}>
-            <Button title={submitLabel} onPress={() => handleSubmit()} busy={isSubmitting} testID="site-submit" />
-            <Button title="Cancel" variant="secondary" onPress={onCancel} />
-          </View>
+          <FormButtons submitTitle={submitLabel} busy={isSubmitting} onSubmit={() => handleSubmit()} onCancel={onCancel} submitFirst testID="site" />
         </View>
       )}
     </Formik>

@@ -6,13 +6,13 @@ import { assetSchema } from '@/shared/schemas/register';
 import type { Asset } from '@/shared/types/register';
 
 /** The fields a supervisor can change straight in the register table. */
-export const INLINE_FIELDS = ['name', 'system', 'serialNumber', 'serviceIntervalMonths', 'lastServiceDate'] as const;
+const INLINE_FIELDS = ['name', 'system', 'serialNumber', 'serviceIntervalMonths', 'lastServiceDate'] as const;
 export type InlineField = (typeof INLINE_FIELDS)[number];
-export type InlineDraft = Record<InlineField, string>;
+type InlineDraft = Record<InlineField, string>;
 
 const inlineSchema = assetSchema.pick([...INLINE_FIELDS]);
 
-export const draftFrom = (a: Asset): InlineDraft => ({
+const draftFrom = (a: Asset): InlineDraft => ({
   name: a.name,
   system: a.system,
   serialNumber: a.serialNumber,

@@ -14,7 +14,7 @@ import { useNow } from '@/components/tags/use-now';
 import { errorMessage } from '@/hooks/api/request';
 import { useMeQuery } from '@/hooks/api/use-auth';
 import { useTagsQuery } from '@/hooks/api/use-tags';
-import { may } from '@/shared/rules/permissions';
+import { usePermissions } from '@/hooks/auth/use-permissions';
 import type { Asset } from '@/shared/types/register';
 
 // The newest few tell the recent story; older ones are a tap away.
@@ -32,7 +32,7 @@ export function AssetTagsPanel({ asset }: { asset: Asset }) {
   const live = all.filter((t) => t.status === 'live');
   const mine = me ? live.some((t) => t.kind === 'isolation' && t.holder.id === me.id) : false;
   const othersIsolating = live.some((t) => t.kind === 'isolation' && t.holder.id !== me?.id);
-  const canRaise = !!me && may(me, 'raiseTag');
+  const canRaise = usePermissions().may('raiseTag');
   const raise = (kind: 'isolation' | 'override') => router.push({ pathname: '/tags/new', params: { assetId: String(asset.id), kind } });
 
   return (

@@ -1,12 +1,15 @@
-import { Formik, type FormikErrors } from 'formik';
+import { Formik } from 'formik';
 import { View } from 'react-native';
+import { FormCheckField } from '@/components/forms/check-field';
+import { FormButtons } from '@/components/forms/form-buttons';
+import { FormReasonField } from '@/components/forms/reason-field';
+import { FormStatusBanner } from '@/components/forms/status-banner';
+import { submitForm, validateWithSchema } from '@/components/forms/submit';
 import { space } from '@/components/theme';
 import { Notice } from '@/components/ui/notice';
-import { ActionButtons, ActionStatusNotice, actionFailed, visibleErrors, type ActionStatus } from '@/components/tags/action-support';
-import { CheckRow, ReasonField, ReleaseChecks, noChecks, type ChecksValue } from '@/components/tags/form-pieces';
-import { validateWith } from '@/components/tags/validate-with';
+import { ReleaseChecks, noChecks, type ChecksValue } from '@/components/tags/release-checks';
 import { useClearInAbsenceMutation } from '@/hooks/api/use-tags';
-import { MIN_CLEARANCE_REASON, RELEASE_CHECKS } from '@/shared/rules/tags';
+import { MIN_CLEARANCE_REASON } from '@/shared/rules/tags';
 import { clearInAbsenceSchema } from '@/shared/schemas/tags';
 import type { Tag } from '@/shared/types/tags';
 
@@ -23,66 +26,29 @@ interface Values {
  */
 export function ClearInAbsenceForm({ tag, onDone, onCancel }: { tag: Tag; onDone: () => void; onCancel?: () => void }) {
   const clear = useClearInAbsenceMutation(tag.id);
-  const isolation = tag.kind === 'isolation';
   const holder = tag.holder.name;
   return (
     <Formik<Values>
       initialValues={{ holderNotOnSite: false, contactAttempts: '', reason: '', checks: noChecks() }}
-      validate={async (v) => {
-        const errors = await validateWith(clearInAbsenceSchema, v);
-        if (isolation) for (const k of RELEASE_CHECKS) if (!v.checks[k]) errors[`checks.${k}`] = 'Confirm this before clearing.';
-        return errors as FormikErrors<Values>;
-      }}
-      onSubmit={async (values, { setErrors, setStatus }) => {
-        setStatus(undefined);
-        try {
-          await clear.mutateAsync({ ...values, reason: values.reason.trim(), contactAttempts: values.contactAttempts.trim() });
-          onDone();
-        } catch (err) {
-          actionFailed(err, setErrors, setStatus);
-        }
+      validate={validateWithSchema(clearInAbsenceSchema, undefined, { kind: tag.kind })}
+      onSubmit={async (values, helpers) => {
+        const body = { ...values, reason: values.reason.trim(), contactAttempts: values.contactAttempts.trim() };
+        if (await submitForm(helpers, () => clear.mutateAsync(body))) onDone();
       }}
     >
-      {({ values, errors, touched, submitCount, setFieldValue, setFieldTouched, submitForm, isSubmitting, status }) => {
-        const shown = visibleErrors(errors, touched, submitCount);
-        return (
-          <View style={{ gap: space.sm }} testID="clear-in-absence-form">
-            <Notice tone="mandatory" title="clearance in the holder’s absence">
-              {`Only when ${holder} cannot remove it: confirm they are not on site and record every attempt to reach them. ${holder} will be told the tag was cleared, and must be told before they resume work.`}
-            </Notice>
-            <CheckRow
-              label={`I have confirmed that ${holder} is not on site`}
-              checked={values.holderNotOnSite}
-              onChange={(v) => void setFieldValue('holderNotOnSite', v)}
-              error={shown.holderNotOnSite}
-              testID="absence-not-on-site"
-            />
-            <ReasonField
-              label="Attempts made to reach the holder"
-              hint="Who tried, how and when: calls, messages, the site office."
-              value={values.contactAttempts}
-              onChange={(t) => void setFieldValue('contactAttempts', t)}
-              onBlur={() => void setFieldTouched('contactAttempts', true)}
-              min={MIN_CLEARANCE_REASON}
-              error={shown.contactAttempts}
-              testID="absence-attempts"
-            />
-            <ReasonField
-              label="Reason for clearing"
-              hint="Why the tag must come off now, and what was checked."
-              value={values.reason}
-              onChange={(t) => void setFieldValue('reason', t)}
-              onBlur={() => void setFieldTouched('reason', true)}
-              min={MIN_CLEARANCE_REASON}
-              error={shown.reason}
-              testID="absence-reason"
-            />
-            {isolation ? <ReleaseChecks value={values.checks} onChange={(c) => void setFieldValue('checks', c)} errors={shown} showErrors={submitCount > 0} /> : null}
-            <ActionStatusNotice status={status as ActionStatus | undefined} />
-            <ActionButtons submitTitle="Clear in holder’s absence" danger busy={isSubmitting} onSubmit={() => void submitForm()} onCancel={onCancel} testID="absence" />
-          </View>
-        );
-      }}
+      {({ submitForm: send, isSubmitting }) => (
+        <View style={{ gap: space.sm }} testID="clear-in-absence-form">
+          <Notice tone="mandatory" title="clearance in the holder’s absence">
+            {`Only when ${holder} cannot remove it: confirm they are not on site and record every attempt to reach them. ${holder} will be told the tag was cleared, and must be told before they resume work.`}
+          </Notice>
+          <FormCheckField name="holderNotOnSite" label={`I have confirmed that ${holder} is not on site`} testID="absence-not-on-site" />
+          <FormReasonField name="contactAttempts" label="Attempts made to reach the holder" hint="Who tried, how and when: calls, messages, the site office." min={MIN_CLEARANCE_REASON} testID="absence-attempts" />
+          <FormReasonField name="reason" label="Reason for clearing" hint="Why the tag must come off now, and what was checked." min={MIN_CLEARANCE_REASON} testID="absence-reason" />
+          {tag.kind === 'isolation' ? <ReleaseChecks /> : null}
+          <FormStatusBanner testID="action-refusal" />
+          <FormButtons submitTitle="Clear in holder’s absence" danger busy={isSubmitting} onSubmit={() => void send()} onCancel={onCancel} testID="absence" />
+        </View>
+      )}
     </Formik>
   );
 }

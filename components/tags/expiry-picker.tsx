@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { useBoundField } from '@/components/forms/bound-fields';
 import { StyleSheet, View } from 'react-native';
 import { colors, radius, space } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
@@ -8,10 +9,10 @@ import { expiryPhrase, formatInZone, localFields, parseLocal, quickExpiry, zoneN
 import { maxExpiryDays } from '@/shared/rules/tags';
 import type { Role } from '@/shared/rules/roles';
 
-export type ExpiryChoice = QuickExpiry | 'custom';
+type ExpiryChoice = QuickExpiry | 'custom';
 
 /** A value the shared schema reads as "not a valid date", so the form says so in its own words. */
-export const UNREADABLE_EXPIRY = 'unreadable';
+const UNREADABLE_EXPIRY = 'unreadable';
 
 const QUICK: { key: QuickExpiry; label: string }[] = [
   { key: 'end-today', label: 'End of today' },
@@ -28,7 +29,6 @@ interface Props {
   testID?: string;
 }
 
-/** Quick choices plus a precise date and time typed in site-local time; the result is shown in words with its zone. */
 /** Which quick choice a stored value came from, so a step shown again marks it. */
 function choiceOf(value: string, timeZone: string): ExpiryChoice {
   const at = Date.parse(value);
@@ -38,7 +38,8 @@ function choiceOf(value: string, timeZone: string): ExpiryChoice {
   return 'custom';
 }
 
-export function ExpiryPicker({ value, onChange, timeZone, role, error, testID = 'expiry' }: Props) {
+/** Quick choices plus a precise date and time typed in site-local time; the result is shown in words with its zone. */
+function ExpiryPicker({ value, onChange, timeZone, role, error, testID = 'expiry' }: Props) {
   const [choice, setChoice] = useState<ExpiryChoice>(() => choiceOf(value, timeZone));
   const valid = value && !Number.isNaN(Date.parse(value)) ? new Date(value) : null;
   const [fields, setFields] = useState(() => (valid ? localFields(valid, timeZone) : { date: '', time: '' }));
@@ -92,3 +93,9 @@ const styles = StyleSheet.create({
   result: { gap: 2, padding: space.md, borderRadius: radius.md, borderWidth: 2, borderColor: colors.line, backgroundColor: colors.surface },
   resultError: { borderColor: colors.danger },
 });
+
+/** The expiry picker bound to a form's field (an ISO time, or UNREADABLE_EXPIRY while the typed one cannot be read). */
+export function FormExpiryField({ name, ...rest }: Omit<Props, 'value' | 'onChange' | 'error'> & { name: string }) {
+  const field = useBoundField<string>(name);
+  return <ExpiryPicker value={field.value} onChange={field.set} error={field.error} {...rest} />;
+}

@@ -2,9 +2,9 @@ import { View } from 'react-native';
 import { space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { ActionStatusNotice, type ActionStatus } from '@/components/tags/action-support';
+import { StatusBanner } from '@/components/forms/status-banner';
+import { failureStatus } from '@/components/forms/submit';
 import { formatInZone } from '@/components/tags/tag-time';
-import { errorMessage, RequestError } from '@/hooks/api/request';
 import { useWithdrawHandoverMutation } from '@/hooks/api/use-tags';
 import type { Tag } from '@/shared/types/tags';
 import type { User } from '@/shared/types/user';
@@ -16,12 +16,11 @@ export function HandoverOfferNotice({ tag, me, now }: { tag: Tag; me: User; now:
   if (!offer) return null;
   const lapses = formatInZone(offer.lapsesAt, tag.asset.timeZone, now);
   const note = offer.note ? ` Note: “${offer.note}”` : '';
-  const failure: ActionStatus | undefined = withdraw.error ? { status: withdraw.error instanceof RequestError ? withdraw.error.status : 0, message: errorMessage(withdraw.error) } : undefined;
   if (me.id === tag.holder.id) {
     return (
       <View style={{ gap: space.sm }} testID="handover-offered-by-me">
         <Notice tone="mandatory" word="Offered">{`You offered this tag to ${offer.to.name}. You hold it until they accept; the offer lapses ${lapses}.${note}`}</Notice>
-        <ActionStatusNotice status={failure} />
+        <StatusBanner status={withdraw.error ? failureStatus(withdraw.error) : null} testID="action-refusal" />
         <Button title="Withdraw the offer" variant="secondary" busy={withdraw.isPending} onPress={() => withdraw.mutate({})} testID="handover-withdraw" />
       </View>
     );

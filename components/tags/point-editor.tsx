@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, layout, radius, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
-import { SelectField } from '@/components/ui/select-field';
+import { FormSelectField, FormTextField, useFieldError } from '@/components/forms/bound-fields';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import type { PointDraft } from '@/components/tags/raise-form-values';
@@ -22,11 +22,16 @@ interface Props {
   excludeAssetId: number;
   onChange: (next: PointDraft) => void;
   onRemove?: () => void;
-  errors: { point?: string; method?: string };
 }
 
-/** One isolation point: a plant item at the same site found by search, or a described point, and the method used there. */
-export function PointEditor({ index, point, siteId, excludeAssetId, onChange, onRemove, errors }: Props) {
+/**
+ * One isolation point, bound to the raise form's `points[index]`: a plant item at the same site found by search, or a
+ * described point, and the method used there.
+ */
+export function PointEditor({ index, point, siteId, excludeAssetId, onChange, onRemove }: Props) {
+  const name = `points[${index}]`;
+  // The schema's rule on the whole point: an item chosen or a point described.
+  const pointError = useFieldError(name);
   const [mode, setMode] = useState<'item' | 'text'>(point.description && !point.asset ? 'text' : 'item');
   const [q, setQ] = useState('');
   const query = useDebouncedValue(q.trim(), 250);
@@ -79,25 +84,16 @@ export function PointEditor({ index, point, siteId, excludeAssetId, onChange, on
           </View>
         )
       ) : (
-        <TextField label="Describe the point" placeholder="e.g. Distribution board DB-2, way 7" value={point.description} onChangeText={(description) => onChange({ ...point, description })} testID={`${tid}-description`} />
+        <FormTextField name={`${name}.description`} label="Describe the point" placeholder="e.g. Distribution board DB-2, way 7" testID={`${tid}-description`} />
       )}
-      {errors.point ? <Text variant="small" style={{ color: colors.danger }}>{`⚠ ${errors.point}`}</Text> : null}
+      {pointError ? <Text variant="small" style={{ color: colors.danger }}>{`⚠ ${pointError}`}</Text> : null}
 
-      <SelectField<IsolationMethod>
-        label="Method at this point"
-        value={point.method || null}
-        options={METHOD_OPTIONS}
-        onChange={(method) => onChange({ ...point, method: method ?? '' })}
-        placeholder="Choose how it is isolated…"
-        error={errors.method}
-        testID={`${tid}-method`}
-      />
+      <FormSelectField<IsolationMethod> name={`${name}.method`} label="Method at this point" options={METHOD_OPTIONS} placeholder="Choose how it is isolated…" testID={`${tid}-method`} />
       {point.method === 'other' ? <Text variant="small" muted>Say how in the reason or a note.</Text> : null}
-      <TextField
+      <FormTextField
+        name={`${name}.lockNumber`}
         label="Lock or tag number at this point (optional)"
         hint="Only if it differs from your personal lock, e.g. a lock box or a multi-lock hasp number."
-        value={point.lockNumber}
-        onChangeText={(lockNumber) => onChange({ ...point, lockNumber })}
         autoCapitalize="characters"
         testID={`${tid}-lock`}
       />

@@ -13,7 +13,7 @@ export function PointUseNotice({ uses }: { uses: PointUse[] }) {
     <Notice tone="danger" word="Isolation point" title="Part of a live isolation — do not operate">
       <View style={{ gap: space.xs }} testID="point-use-notice">
         {uses.map((u) => (
-          <Link key={`${u.tagId}-${u.forAsset.id}`} href={`/tags/${u.tagId}` as never}>
+          <Link key={`${u.tagId}-${u.forAsset.id}`} href={`/tags/${u.tagId}`}>
             <Text>
               {`${ISOLATION_METHOD_LABELS[u.method]} for work on `}
               <Text bold>{`${u.forAsset.plantId} · ${u.forAsset.name}`}</Text>

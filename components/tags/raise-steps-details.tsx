@@ -1,23 +1,22 @@
 import { View } from 'react-native';
-import { colors, space } from '@/components/theme';
+import { FieldMessage, FormTextField } from '@/components/forms/bound-fields';
+import { space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Chip } from '@/components/ui/chip';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
 import { ENERGY_SOURCE_ICONS } from '@/components/register/register-vocabulary';
 import { PointEditor } from '@/components/tags/point-editor';
 import { ProofFields } from '@/components/tags/proof-fields';
 import { newPoint } from '@/components/tags/raise-form-values';
-import type { StepProps } from '@/components/tags/raise-steps-kind';
+import { useRaiseForm } from '@/components/tags/raise-steps-kind';
 import { ENERGY_SOURCE_LABELS } from '@/shared/rules/register';
 import { MIN_OMISSION_REASON } from '@/shared/rules/tag-isolation';
 import type { Asset } from '@/shared/types/register';
 
-const Err = ({ text }: { text?: string }) => (text ? <Text variant="small" style={{ color: colors.danger }}>{`⚠ ${text}`}</Text> : null);
-
 /** Step 2 of an isolation: which of the item's own energy sources, and where and how each is isolated. */
-function IsolationDetails({ values, set, errors, asset }: StepProps & { asset: Asset }) {
+function IsolationDetails({ asset }: { asset: Asset }) {
+  const { values, set } = useRaiseForm();
   const toggle = (s: (typeof values.energySources)[number]) =>
     set('energySources', values.energySources.includes(s) ? values.energySources.filter((x) => x !== s) : asset.energySources.filter((x) => x === s || values.energySources.includes(x)));
   return (
@@ -39,16 +38,16 @@ function IsolationDetails({ values, set, errors, asset }: StepProps & { asset: A
           </Notice>
         )}
         {asset.energySources.filter((s) => !values.energySources.includes(s)).map((s) => (
-          <TextField
+          <FormTextField
             key={s}
+            name={`omitted.${s}`}
             label={`${ENERGY_SOURCE_LABELS[s]} — not isolated: why is it safe?`}
             hint={`At least ${MIN_OMISSION_REASON} characters, e.g. “drained down at the valves either side”.`}
-            value={values.omitted[s] ?? ''}
-            onChangeText={(t) => set('omitted', { ...values.omitted, [s]: t })}
             testID={`omit-${s}`}
           />
         ))}
-        <Err text={errors.energySources ?? errors.omittedSources} />
+        <FieldMessage name="energySources" />
+        <FieldMessage name="omittedSources" />
       </View>
       <View style={{ gap: space.sm }}>
         <Text variant="label" bold>Isolation points and methods</Text>
@@ -62,41 +61,39 @@ function IsolationDetails({ values, set, errors, asset }: StepProps & { asset: A
             excludeAssetId={asset.id}
             onChange={(next) => set('points', values.points.map((x) => (x.key === p.key ? next : x)))}
             onRemove={values.points.length > 1 ? () => set('points', values.points.filter((x) => x.key !== p.key)) : undefined}
-            errors={{ point: errors[`points[${i}]`] ?? errors[`points[${i}].description`], method: errors[`points[${i}].method`] }}
           />
         ))}
-        <Err text={errors.points} />
+        <FieldMessage name="points" />
         <Button title="Add another point" variant="secondary" onPress={() => set('points', [...values.points, newPoint()])} testID="add-point" />
       </View>
       <Notice tone="mandatory" title="prove it before work">
         Test for dead with a proved tester, check the gauge reads zero, or try the start controls. A wrong breaker, a back-feed or a passing valve is only found by proving.
       </Notice>
-      <ProofFields value={values.proof} onChange={(p) => set('proof', p)} errors={errors} optional />
+      <ProofFields name="proof" optional />
     </View>
   );
 }
 
 /** Step 2 of an override: the normal state and the state it was left in. */
-function OverrideDetails({ values, set, errors }: StepProps) {
+function OverrideDetails() {
   return (
     <View style={{ gap: space.sm }}>
-      <TextField label="Normal state" hint="e.g. Flow setpoint 80 °C, actuator on auto" value={values.normalState} onChangeText={(t) => set('normalState', t)} error={errors.normalState} testID="raise-normal-state" />
-      <TextField label="State it was left in" hint="e.g. Flow setpoint 85 °C, actuator on manual at 40 %" value={values.leftState} onChangeText={(t) => set('leftState', t)} error={errors.leftState} testID="raise-left-state" />
+      <FormTextField name="normalState" label="Normal state" hint="e.g. Flow setpoint 80 °C, actuator on auto" testID="raise-normal-state" />
+      <FormTextField name="leftState" label="State it was left in" hint="e.g. Flow setpoint 85 °C, actuator on manual at 40 %" testID="raise-left-state" />
     </View>
   );
 }
 
-export function DetailsStep(props: StepProps & { asset: Asset }) {
-  const { values, set, errors } = props;
+export function DetailsStep({ asset }: { asset: Asset }) {
+  const { values } = useRaiseForm();
+  const isolation = values.kind === 'isolation';
   return (
     <View style={{ gap: space.md }}>
-      {values.kind === 'isolation' ? <IsolationDetails {...props} /> : <OverrideDetails {...props} />}
-      <TextField
-        label={values.kind === 'isolation' ? 'Your personal lock number' : 'Lock or tag number (optional)'}
-        hint={values.kind === 'isolation' ? 'Required: the number on the lock you have put on. Not a plant or switchgear reference.' : 'Optional.'}
-        value={values.lockNumber}
-        onChangeText={(t) => set('lockNumber', t)}
-        error={errors.lockNumber}
+      {isolation ? <IsolationDetails asset={asset} /> : <OverrideDetails />}
+      <FormTextField
+        name="lockNumber"
+        label={isolation ? 'Your personal lock number' : 'Lock or tag number (optional)'}
+        hint={isolation ? 'Required: the number on the lock you have put on. Not a plant or switchgear reference.' : 'Optional.'}
         autoCapitalize="characters"
         testID="raise-lock-number"
       />

@@ -2,20 +2,23 @@ import { MaterialCommunityIcons } from '@expo/vector-icons';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, radius, space } from '@/components/theme';
 import { Text } from '@/components/ui/text';
-import { ReasonField } from '@/components/tags/form-pieces';
+import { useFormikContext } from 'formik';
+import { FieldMessage } from '@/components/forms/bound-fields';
+import { FormReasonField } from '@/components/forms/reason-field';
 import type { RaiseValues } from '@/components/tags/raise-form-values';
 import { KIND_LOOK, TONE_COLORS } from '@/components/tags/tag-vocabulary';
 import { MIN_RAISE_REASON, TAG_KINDS, type TagKind } from '@/shared/rules/tags';
 
-export interface StepProps {
-  values: RaiseValues;
-  set: <K extends keyof RaiseValues>(key: K, value: RaiseValues[K]) => void;
-  /** Errors to show now, keyed as the server keys them. */
-  errors: Record<string, string | undefined>;
+/** The raise form's values and a typed setter, for the steps' own widgets (chips, lists). */
+export function useRaiseForm() {
+  const { values, setFieldValue } = useFormikContext<RaiseValues>();
+  const set = <K extends keyof RaiseValues>(key: K, value: RaiseValues[K]) => void setFieldValue(key, value);
+  return { values, set };
 }
 
 /** Step 1: isolation or override, and why. */
-export function KindReasonStep({ values, set, errors }: StepProps) {
+export function KindReasonStep() {
+  const { values, set } = useRaiseForm();
   return (
     <View style={{ gap: space.md }}>
       <View style={styles.kinds} role="radiogroup" aria-label="Kind of tag">
@@ -44,14 +47,12 @@ export function KindReasonStep({ values, set, errors }: StepProps) {
           );
         })}
       </View>
-      {errors.kind ? <Text variant="small" style={{ color: colors.danger }}>{`⚠ ${errors.kind}`}</Text> : null}
-      <ReasonField
+      <FieldMessage name="kind" />
+      <FormReasonField
+        name="reason"
         label="Reason"
         hint={values.kind === 'isolation' ? 'The work being done, e.g. “Replace mechanical seal”.' : 'Why it was left this way, e.g. “Setpoint raised to test the calorifier”.'}
-        value={values.reason}
-        onChange={(t) => set('reason', t)}
         min={MIN_RAISE_REASON}
-        error={errors.reason}
         testID="raise-reason"
       />
     </View>

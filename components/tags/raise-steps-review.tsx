@@ -1,10 +1,10 @@
 import { View } from 'react-native';
 import { space } from '@/components/theme';
 import { Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
+import { FormTextField } from '@/components/forms/bound-fields';
 import { DetailList } from '@/components/register/detail-list';
-import { ExpiryPicker } from '@/components/tags/expiry-picker';
-import type { StepProps } from '@/components/tags/raise-steps-kind';
+import { FormExpiryField } from '@/components/tags/expiry-picker';
+import type { RaiseValues } from '@/components/tags/raise-form-values';
 import { expiryPhrase, formatInZone } from '@/components/tags/tag-time';
 import { KIND_LOOK } from '@/components/tags/tag-vocabulary';
 import { ENERGY_SOURCE_LABELS } from '@/shared/rules/register';
@@ -13,21 +13,19 @@ import type { Role } from '@/shared/rules/roles';
 import type { Asset } from '@/shared/types/register';
 
 /** Step 3: when the tag expires (at the site) and how to reach the holder. */
-export function ExpiryContactStep({ values, set, errors, timeZone, role }: StepProps & { timeZone: string; role: Role }) {
+export function ExpiryContactStep({ timeZone, role }: { timeZone: string; role: Role }) {
   return (
     <View style={{ gap: space.md }}>
       <View style={{ gap: space.xs }}>
         <Text variant="label" bold>Expiry</Text>
-        <ExpiryPicker value={values.expiresAt} onChange={(iso) => set('expiresAt', iso)} timeZone={timeZone} role={role} error={errors.expiresAt} testID="raise-expiry" />
+        <FormExpiryField name="expiresAt" timeZone={timeZone} role={role} testID="raise-expiry" />
       </View>
-      <TextField
+      <FormTextField
+        name="contactPhone"
         label="Contact phone"
         hint="Where you can be reached while the tag is on, so nobody has to guess."
-        value={values.contactPhone}
-        onChangeText={(t) => set('contactPhone', t)}
         keyboardType="phone-pad"
         autoComplete="tel"
-        error={errors.contactPhone}
         testID="raise-contact-phone"
       />
     </View>
@@ -35,7 +33,7 @@ export function ExpiryContactStep({ values, set, errors, timeZone, role }: StepP
 }
 
 /** Step 4: everything as it will be recorded. */
-export function RaiseReview({ values, asset, timeZone, holderName }: { values: StepProps['values']; asset: Asset; timeZone: string; holderName: string }) {
+export function RaiseReview({ values, asset, timeZone, holderName }: { values: RaiseValues; asset: Asset; timeZone: string; holderName: string }) {
   const now = new Date();
   const valid = !Number.isNaN(Date.parse(values.expiresAt));
   const rows: [string, string][] = [

@@ -1,4 +1,4 @@
-import { Formik, type FormikErrors } from 'formik';
+import { Formik, setNestedObjectValues, type FormikTouched } from 'formik';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, radius, space } from '@/components/theme';
@@ -11,12 +11,12 @@ import { IsolationCautions, OverrideCautions } from '@/components/tags/isolation
 import { scrollToStart } from '@/components/tags/scroll-to';
 import { withPlan } from '@/components/connections/plan-to-raise';
 import type { IsolationPlan } from '@/shared/types/connections';
+import { FormStatusBanner } from '@/components/forms/status-banner';
+import { submitForm as submitWith } from '@/components/forms/submit';
 import { firstStepWithError, initialRaiseValues, RAISE_STEPS, stepOf, toRaiseInput, validateRaise, type RaiseValues } from '@/components/tags/raise-form-values';
 import { DetailsStep } from '@/components/tags/raise-steps-details';
 import { KindReasonStep } from '@/components/tags/raise-steps-kind';
 import { ExpiryContactStep, RaiseReview } from '@/components/tags/raise-steps-review';
-import type { FieldErrors } from '@/components/tags/validate-with';
-import { RequestError, errorMessage } from '@/hooks/api/request';
 import { newIdempotencyKey, useRaiseTagMutation } from '@/hooks/api/use-tags';
 import type { TagKind } from '@/shared/rules/tags';
 import { endOfDayInZone } from '@/shared/rules/time-zone';
@@ -42,7 +42,7 @@ const FIELD_NAMES: [RegExp, string][] = [
 ];
 
 /** "Check: reason, normal state." — what still needs an answer, in the order of the form. */
-function errorSummary(errors: FieldErrors): string {
+function errorSummary(errors: object): string {
   const names = FIELD_NAMES.filter(([re]) => Object.keys(errors).some((k) => re.test(k))).map(([, n]) => n);
   return names.length ? `Some answers need attention: ${names.join(', ')}.` : '';
 }
@@ -54,7 +54,6 @@ export function RaiseTagForm({ asset, site, me, initialKind, plan, onRaised, onC
   // One key for this form until a tag is made: every retry of the submission sends it, so the server makes one tag.
   const idempotencyKey = useRef(newIdempotencyKey());
   const [step, setStep] = useState(0);
-  const [tried, setTried] = useState<Set<number>>(new Set());
   const top = useRef<View>(null);
   useEffect(() => { if (step > 0) scrollToStart(top.current); }, [step]);
   const initialValues = useMemo(() => withPlan(initialRaiseValues(initialKind, endOfDayInZone(new Date(), site.timeZone), asset.energySources), plan), [initialKind, site.timeZone, asset.energySources, plan]);
@@ -62,51 +61,40 @@ export function RaiseTagForm({ asset, site, me, initialKind, plan, onRaised, onC
   return (
     <Formik<RaiseValues>
       initialValues={initialValues}
-      validate={(v) => validateRaise(v, me.role, asset.energySources) as Promise<FormikErrors<RaiseValues>>}
+      validate={validateRaise(me.role, asset.energySources)}
       onSubmit={async (values, { setErrors, setStatus }) => {
-        setStatus(undefined);
-        try {
-          const tag = await raise.mutateAsync({ input: toRaiseInput(values), idempotencyKey: idempotencyKey.current });
-          onRaised(tag);
-        } catch (err) {
-          if (err instanceof RequestError && err.fields) {
-            setErrors(err.fields as FormikErrors<RaiseValues>);
-            if (!isWide) setStep(firstStepWithError(err.fields));
-          }
-          setStatus(errorMessage(err));
-        }
+        // A refusal's field messages go beside their fields; on a phone the form turns back to the first step holding one.
+        const onFields = (errors: Parameters<typeof setErrors>[0]) => { setErrors(errors); if (!isWide) setStep(firstStepWithError(errors)); };
+        const tag = await submitWith({ setErrors: onFields, setStatus }, () => raise.mutateAsync({ input: toRaiseInput(values), idempotencyKey: idempotencyKey.current }));
+        if (tag) onRaised(tag);
       }}
     >
-      {({ values, errors, setFieldValue, submitForm, validateForm, isSubmitting, submitCount, status }) => {
-        const all = errors as FieldErrors;
-        const shown: Record<string, string | undefined> = {};
-        for (const [k, v] of Object.entries(all)) if (submitCount > 0 || tried.has(stepOf(k))) shown[k] = v;
-        const set = <K extends keyof RaiseValues>(key: K, value: RaiseValues[K]) => void setFieldValue(key as string, value);
-        const stepProps = { values, set, errors: shown };
+      {({ values, errors, touched, setTouched, submitForm, validateForm, isSubmitting, submitCount, status }) => {
         const isolation = values.kind === 'isolation';
 
+        // A step's messages show once Next was pressed on it (as the kit shows a field's once it was touched).
         const next = async () => {
-          const found = (await validateForm()) as FieldErrors;
-          setTried((t) => new Set(t).add(step));
-          if (!Object.keys(found).some((k) => stepOf(k) === step)) setStep(step + 1);
+          const found = Object.entries(await validateForm()).filter(([k]) => stepOf(k) === step);
+          if (!found.length) setStep(step + 1);
+          else void setTouched({ ...touched, ...setNestedObjectValues(Object.fromEntries(found), true) } as FormikTouched<RaiseValues>, false);
         };
         const submit = async () => {
-          const found = (await validateForm()) as FieldErrors;
+          const found = await validateForm();
           if (!isWide && Object.keys(found).length) setStep(firstStepWithError(found));
           await submitForm();
         };
 
         const sections = [
-          <KindReasonStep key="kind" {...stepProps} />,
-          <DetailsStep key="details" {...stepProps} asset={asset} />,
-          <ExpiryContactStep key="expiry" {...stepProps} timeZone={site.timeZone} role={me.role} />,
+          <KindReasonStep key="kind" />,
+          <DetailsStep key="details" asset={asset} />,
+          <ExpiryContactStep key="expiry" timeZone={site.timeZone} role={me.role} />,
           <RaiseReview key="review" values={values} asset={asset} timeZone={site.timeZone} holderName={me.name} />,
         ];
-        const summary = submitCount > 0 ? errorSummary(all) : '';
+        const summary = submitCount > 0 ? errorSummary(errors) : '';
         const footer = (
           <View style={{ gap: space.md }}>
             {isolation ? <IsolationCautions /> : <OverrideCautions />}
-            {status ? <Notice tone="danger" word="Not raised">{status}</Notice> : null}
+            <FormStatusBanner word="Not raised" />
             {summary && !status ? <Notice tone="danger" word="Check">{summary}</Notice> : null}
           </View>
         );

@@ -14,7 +14,8 @@ import { ProveForm } from '@/components/tags/prove-form';
 import { ReassignInAbsenceForm } from '@/components/tags/reassign-in-absence-form';
 import { TagNoteForm } from '@/components/tags/tag-note-form';
 import { handoverRole } from '@/shared/rules/tag-handover';
-import { clearancePermission, mayExtend, mayReassignInAbsence } from '@/shared/rules/permissions';
+import { clearancePermission } from '@/shared/rules/permissions';
+import { usePermissions } from '@/hooks/auth/use-permissions';
 import type { Tag } from '@/shared/types/tags';
 import type { User } from '@/shared/types/user';
 
@@ -48,10 +49,11 @@ const DONE: Record<Action, string> = {
 export function TagActions({ tag, me, now }: { tag: Tag; me: User; now: Date }) {
   const [open, setOpen] = useState<Action | null>(null);
   const [done, setDone] = useState<string | null>(null);
+  const { may, mayOn } = usePermissions();
   if (tag.status !== 'live') {
     return done ? <Notice tone="safe" word="Done">{done}</Notice> : null;
   }
-  if (me.role === 'viewer') return <Notice tone="info" word="Read only">Viewers can see tags but not change them.</Notice>;
+  if (!may('annotateTag')) return <Notice tone="info" word="Read only">Viewers can see tags but not change them.</Notice>;
 
   const offer = tag.handoverOffer;
   const held = { status: tag.status, holderId: tag.holder.id, toUserId: offer?.to.id ?? null, lapsesAt: offer?.lapsesAt ?? null };
@@ -70,10 +72,10 @@ export function TagActions({ tag, me, now }: { tag: Tag; me: User; now: Date }) 
     { action: 'prove', title: 'Record proof of isolation', show: role === 'holder' && tag.proved === false, variant: 'primary' },
     { action: permission === 'own' ? 'clear' : 'refused', title: 'Clear this tag', show: true, variant: permission === 'own' ? 'primary' : 'secondary' },
     { action: 'absence', title: 'Clear in holder’s absence', show: permission === 'in-absence', variant: 'secondary' },
-    { action: 'reassign', title: 'Reassign in holder’s absence', show: mayReassignInAbsence(me, held), variant: 'secondary' },
-    { action: 'extend', title: 'Extend expiry', show: mayExtend(me, held), variant: 'secondary' },
+    { action: 'reassign', title: 'Reassign in holder’s absence', show: mayOn('reassignTagInAbsence', held), variant: 'secondary' },
+    { action: 'extend', title: 'Extend expiry', show: mayOn('extendTag', held), variant: 'secondary' },
     { action: 'offer', title: 'Offer to a colleague', show: role === 'holder' && !offer, variant: 'secondary' },
-    { action: 'note', title: 'Add a note', show: true, variant: 'secondary' },
+    { action: 'note', title: 'Add a note', show: may('annotateTag'), variant: 'secondary' },
   ];
 
   return (

@@ -14,7 +14,7 @@ export function TagCard({ tag, now }: { tag: Tag; now: Date }) {
   const overdue = tag.overdue || isOverdue(tag, now);
   const edge = TONE_COLORS[kind.tone].solid;
   return (
-    <Link href={`/tags/${tag.id}` as never} asChild>
+    <Link href={`/tags/${tag.id}`} asChild>
       <Pressable
         accessibilityRole="link"
         accessibilityLabel={`${kind.word} tag held by ${tag.holder.name}: ${tag.reason}`}

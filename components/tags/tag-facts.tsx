@@ -40,7 +40,7 @@ export function TagFacts({ tag }: { tag: Tag }) {
                 <MaterialCommunityIcons name={METHOD_ICONS[p.method]} size={24} color={colors.ink} />
                 <View style={{ flex: 1 }}>
                   {p.asset ? (
-                    <Link href={`/assets/${p.asset.id}` as never} asChild>
+                    <Link href={`/assets/${p.asset.id}`} asChild>
                       <Pressable accessibilityRole="link" style={styles.link}>
                         <Text bold style={styles.linkText}>{`${p.asset.plantId} · ${p.asset.name}`}</Text>
                       </Pressable>

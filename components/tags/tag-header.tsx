@@ -6,13 +6,13 @@ import { colors, layout, radius, space } from '@/components/theme';
 import { useBreakpoints } from '@/components/theme/use-breakpoints';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
+import { telHref } from '@/components/board/board-vocabulary';
 import { expiryPhrase, formatInZone } from '@/components/tags/tag-time';
 import { KIND_LOOK, STATE_LOOK, TONE_COLORS } from '@/components/tags/tag-vocabulary';
 import { isOverdue } from '@/shared/rules/tags';
 import type { Tag } from '@/shared/types/tags';
 
 const capitalise = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
-const telHref = (phone: string) => `tel:${phone.replace(/[^+\d]/g, '')}`;
 
 function Line({ icon, label, children, wide }: { icon: ComponentProps<typeof MaterialCommunityIcons>['name']; label: string; children: ReactNode; wide?: boolean }) {
   return (
@@ -59,7 +59,7 @@ export function TagHeader({ tag, now }: { tag: Tag; now: Date }) {
       ) : null}
       <View style={[styles.body, isWide && styles.bodyWide]}>
         <Line wide={isWide} icon="map-marker-outline" label="Item">
-          <Link href={`/assets/${tag.asset.id}` as never} asChild>
+          <Link href={`/assets/${tag.asset.id}`} asChild>
             <Pressable accessibilityRole="link" style={styles.link} testID="tag-item-link">
               <Text bold style={styles.linkText}>{`${tag.asset.plantId} · ${tag.asset.name}`}</Text>
             </Pressable>
@@ -69,7 +69,7 @@ export function TagHeader({ tag, now }: { tag: Tag; now: Date }) {
         <Line wide={isWide} icon="account-hard-hat" label={tag.status === 'live' ? 'Held by' : 'Was held by'}>
           <Text bold testID="tag-holder">{tag.holder.name}</Text>
           {tag.contactPhone && tag.status === 'live' ? (
-            <Link href={telHref(tag.contactPhone) as never} asChild>
+            <Link href={telHref(tag.contactPhone)} asChild>
               <Pressable accessibilityRole="link" accessibilityLabel={`Call ${tag.holder.name} on ${tag.contactPhone}`} style={StyleSheet.flatten([styles.link, styles.call])} testID="tag-call">
                 <MaterialCommunityIcons name="phone" size={20} color={colors.brand} />
                 <Text bold style={styles.linkText}>{`Call ${tag.contactPhone}`}</Text>

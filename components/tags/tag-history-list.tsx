@@ -18,7 +18,7 @@ export function TagHistoryList({ tags, now, limit }: { tags: Tag[]; now: Date; l
         const state = tag.status === 'cleared' ? STATE_LOOK.cleared : tag.overdue || isOverdue(tag, now) ? STATE_LOOK.overdue : { word: 'Live', icon: kind.icon };
         const tz = tag.asset.timeZone;
         return (
-          <Link key={tag.id} href={`/tags/${tag.id}` as never} asChild>
+          <Link key={tag.id} href={`/tags/${tag.id}`} asChild>
             <Pressable accessibilityRole="link" style={styles.entry} testID={`history-tag-${tag.id}`}>
               <View style={styles.rail}>
                 <View style={styles.dot}><MaterialCommunityIcons name={kind.icon} size={18} color={colors.ink} /></View>

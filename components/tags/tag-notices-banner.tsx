@@ -2,21 +2,20 @@ import { View } from 'react-native';
 import { space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { ActionStatusNotice, type ActionStatus } from '@/components/tags/action-support';
-import { errorMessage, RequestError } from '@/hooks/api/request';
+import { StatusBanner } from '@/components/forms/status-banner';
+import { failureStatus } from '@/components/forms/submit';
 import { useAcknowledgeTagMutation, useTagNoticesQuery } from '@/hooks/api/use-tags';
 import type { TagNotice } from '@/shared/types/tags';
 
 function NoticeRow({ notice }: { notice: TagNotice }) {
   const ack = useAcknowledgeTagMutation(notice.tagId);
   const what = notice.kind === 'cleared-in-absence' ? 'cleared' : 'moved to a colleague';
-  const failure: ActionStatus | undefined = ack.error ? { status: ack.error instanceof RequestError ? ack.error.status : 0, message: errorMessage(ack.error) } : undefined;
   return (
     <View style={{ gap: space.sm }} testID={`tag-notice-${notice.tagId}`}>
       <Notice tone="danger" word="While you were away">
         {`${notice.by.name} ${what} your tag on ${notice.asset.plantId} ${notice.asset.name}: “${notice.reason}”. Your lock may have been removed. Speak to them and check the plant before you resume any work.`}
       </Notice>
-      <ActionStatusNotice status={failure} />
+      <StatusBanner status={ack.error ? failureStatus(ack.error) : null} testID="action-refusal" />
       <Button title="I have read this" variant="primary" busy={ack.isPending} onPress={() => ack.mutate({})} testID={`tag-notice-ack-${notice.tagId}`} />
     </View>
   );

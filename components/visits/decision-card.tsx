@@ -6,7 +6,7 @@ import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
-import { multilineStyle } from '@/components/tags/form-pieces';
+import { multilineStyle } from '@/components/forms/bound-fields';
 import { KIND_LOOK } from '@/components/tags/tag-vocabulary';
 import { expiryPhrase, formatInZone } from '@/components/tags/tag-time';
 import { useTagColleaguesQuery } from '@/hooks/api/use-tags';

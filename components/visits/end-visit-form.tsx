@@ -7,7 +7,7 @@ import { failureStatus, type FormStatus } from '@/components/forms/submit';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
-import { multilineStyle } from '@/components/tags/form-pieces';
+import { multilineStyle } from '@/components/forms/bound-fields';
 import { useNow } from '@/components/tags/use-now';
 import { DecisionCard, type DecisionDraft } from '@/components/visits/decision-card';
 import { RequestError } from '@/hooks/api/request';

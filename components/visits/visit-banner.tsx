@@ -26,7 +26,7 @@ export function VisitBanner({ siteId, siteName, next, now }: { siteId: number; s
             <Text bold>{`Your visit here is in progress (started ${agoPhrase(v.startedAt, now)})`}</Text>
             <Text variant="small" muted numberOfLines={2}>{v.purpose}</Text>
           </View>
-          <Button title="Open visit" variant="secondary" onPress={() => router.push(`/visits/${v.id}` as never)} testID="visit-open" />
+          <Button title="Open visit" variant="secondary" onPress={() => router.push(`/visits/${v.id}`)} testID="visit-open" />
         </View>
       </Card>
     );
@@ -38,7 +38,7 @@ export function VisitBanner({ siteId, siteName, next, now }: { siteId: number; s
     <Card>
       <View style={{ flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md }} testID="visit-none">
         <Text style={{ flex: 1, minWidth: 200 }}>{`No visit open at ${siteName}. Start one so what you do here is recorded and nothing is left unexplained.`}</Text>
-        <Button title="Start a visit" onPress={() => router.push({ pathname: '/visits/new', params: { siteId, ...(next ? { next } : {}) } } as never)} testID="visit-start" />
+        <Button title="Start a visit" onPress={() => router.push({ pathname: '/visits/new', params: { siteId, ...(next ? { next } : {}) } })} testID="visit-start" />
       </View>
     </Card>
   );

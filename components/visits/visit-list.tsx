@@ -12,7 +12,7 @@ export function VisitList({ visits, now }: { visits: Visit[]; now: Date }) {
   return (
     <View style={{ gap: space.sm }}>
       {visits.map((v) => (
-        <Link key={v.id} href={`/visits/${v.id}` as never} asChild>
+        <Link key={v.id} href={`/visits/${v.id}`} asChild>
           <Pressable style={styles.row} accessibilityRole="link" testID={`visit-row-${v.id}`}>
             <MaterialCommunityIcons name={v.inProgress ? 'account-hard-hat' : 'clipboard-check-outline'} size={24} color={colors.ink} />
             <View style={{ flex: 1 }}>

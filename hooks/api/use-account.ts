@@ -4,7 +4,7 @@ import { useAuth } from '@/hooks/auth/auth-provider';
 import type { MySettingsInput, ResetRequestInput, SetPasswordInput } from '@/shared/schemas/team';
 import type { MySettings, ResetRequestResponse, SetPasswordResponse } from '@/shared/types/team';
 
-export const accountKeys = { settings: ['me', 'settings'] as const };
+const accountKeys = { settings: ['me', 'settings'] as const };
 
 export function useMySettingsQuery() {
   const { token } = useAuth();

@@ -11,7 +11,7 @@ import type { AssetInput } from '@/shared/schemas/register';
 import type { Asset, ImportResult, Photo } from '@/shared/types/register';
 import type { ListResponse } from '@/shared/types/api';
 
-export interface AssetFilters {
+interface AssetFilters {
   q?: string;
   siteId?: number | null;
   plantRoomId?: number | null;

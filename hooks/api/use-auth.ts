@@ -4,7 +4,7 @@ import { useAuth } from '@/hooks/auth/auth-provider';
 import type { SignInInput } from '@/shared/schemas/auth';
 import type { SignInResponse, User } from '@/shared/types/user';
 
-export const authKeys = { me: ['me'] as const };
+const authKeys = { me: ['me'] as const };
 
 export function useMeQuery() {
   const { token } = useAuth();

@@ -4,7 +4,7 @@ import type { EnergySource } from '@/shared/rules/register';
 import type { ConnectionInput } from '@/shared/schemas/connections';
 import type { AssetConnections, ClosingAffects, Connection, ConnectionImportResult, IsolationPlan, PlantRoomDiagram } from '@/shared/types/connections';
 
-export const connectionKeys = {
+const connectionKeys = {
   all: ['connections'] as const,
   forAsset: (id: number) => [...connectionKeys.all, 'asset', id] as const,
   plan: (id: number, sources: EnergySource[]) => [...connectionKeys.all, 'plan', id, sources] as const,

@@ -5,7 +5,7 @@ import type { HeatingSystemInput } from '@/shared/schemas/readings';
 import type { HeatingSystem, SystemExpansionCheck } from '@/shared/types/readings';
 import type { ListResponse } from '@/shared/types/user';
 
-export const heatingSystemKeys = {
+const heatingSystemKeys = {
   all: ['heating-systems'] as const,
   site: (siteId: number) => [...heatingSystemKeys.all, 'site', siteId] as const,
   expansion: (siteId: number, name: string) => [...heatingSystemKeys.all, 'expansion', siteId, name] as const,

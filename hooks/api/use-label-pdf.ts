@@ -11,7 +11,7 @@ export interface LabelPdfSelection {
   siteId?: number;
 }
 
-export function labelPdfPath(selection: LabelPdfSelection, layout: LabelLayout) {
+function labelPdfPath(selection: LabelPdfSelection, layout: LabelLayout) {
   // One selection only, the narrowest given: items, else a plant room, else a site.
   const { assetIds, plantRoomId, siteId } = selection;
   const narrowest = assetIds?.length ? { assetIds } : plantRoomId ? { plantRoomId } : { siteId };

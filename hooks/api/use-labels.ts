@@ -4,7 +4,7 @@ import { assetKeys } from '@/hooks/api/use-assets';
 import { cachedAssetByLabel } from '@/hooks/offline/visited-items';
 import type { Asset } from '@/shared/types/register';
 
-export const labelKeys = {
+const labelKeys = {
   all: ['labels'] as const,
   code: (code: string) => [...labelKeys.all, code] as const,
   retired: (assetId: number) => [...labelKeys.all, 'retired', assetId] as const,

@@ -4,13 +4,13 @@ import { Platform } from 'react-native';
 import type { ImagePickerAsset } from 'expo-image-picker';
 import { fetchBlob } from '@/hooks/api/request';
 
-export const photoKeys = {
+const photoKeys = {
   all: ['photos'] as const,
   file: (url: string) => [...photoKeys.all, 'file', url] as const,
 };
 
 /** A photo file, fetched with the bearer token. Photos never change once stored, so they stay fresh. */
-export function usePhotoBlobQuery(url: string | null) {
+function usePhotoBlobQuery(url: string | null) {
   return useQuery({
     queryKey: photoKeys.file(url ?? ''),
     queryFn: () => fetchBlob(url!),

@@ -4,7 +4,7 @@ import { boardKeys } from '@/hooks/api/use-board';
 import type { ProcedureReviewInput } from '@/shared/schemas/procedure-reviews';
 import type { ProcedureReview, ProcedureReviewList } from '@/shared/types/procedure-reviews';
 
-export const procedureReviewKeys = {
+const procedureReviewKeys = {
   all: ['procedure-reviews'] as const,
   site: (siteId: number) => [...procedureReviewKeys.all, 'site', siteId] as const,
 };

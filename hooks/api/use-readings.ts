@@ -5,7 +5,7 @@ import type { ReadingCorrectionInput, ReadingSetInput } from '@/shared/schemas/r
 import type { LatestFlaggedReading, ReadingList, ReadingSet } from '@/shared/types/readings';
 
 // Enough sets for a useful trend on one item; older sets stay on record and are paged by the API.
-export const TREND_PAGE_SIZE = 200;
+const TREND_PAGE_SIZE = 200;
 
 export const readingKeys = {
   all: ['readings'] as const,

@@ -77,7 +77,7 @@ function keyFor(variables: object, action: string): string {
   return key;
 }
 
-export interface RaiseTagVariables {
+interface RaiseTagVariables {
   input: RaiseTagInput;
   idempotencyKey: string;
 }

@@ -17,7 +17,7 @@ export interface AuditEntry {
   ip: string | null;
 }
 
-export const teamKeys = {
+const teamKeys = {
   all: ['team'] as const,
   members: () => [...teamKeys.all, 'members'] as const,
   audit: (page: number, pageSize: number) => [...teamKeys.all, 'audit', page, pageSize] as const,

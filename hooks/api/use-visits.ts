@@ -14,7 +14,7 @@ export interface VisitFilters {
   to?: string;
 }
 
-export const visitKeys = {
+const visitKeys = {
   all: ['visits'] as const,
   forSite: (siteId: number, filters: VisitFilters) => [...visitKeys.all, 'site', siteId, filters] as const,
   detail: (id: number) => [...visitKeys.all, 'detail', id] as const,

@@ -4,7 +4,7 @@ import { BOARD_STATE_LABELS } from '@/shared/rules/board';
 import type { BoardRow } from '@/shared/types/board';
 
 export const BOARD_CSV_COLUMNS = [
-  'Site', 'Plant room', 'Plant ID', 'Item', 'Kind', 'Reason', 'Holder', 'Raised (site time)', 'Expires (site time)', 'Time zone', 'State', 'Contact phone', 'Tag',
+  'Site', 'Plant room', 'Plant ID', 'Item', 'Kind', 'Reason', 'Holder', 'Raised (site time)', 'Expires (site time)', 'Time zone', 'State', 'Proof of isolation', 'Contact phone', 'Tag',
 ] as const;
 
 /** "2025-03-04 14:05" as the clock reads on site. */
@@ -16,11 +16,14 @@ export function siteTime(iso: string, timeZone: string): string {
   return `${parts.year}-${parts.month}-${parts.day} ${parts.hour}:${parts.minute}`;
 }
 
+/** Isolations say whether a proof is recorded (OSHA 29 CFR 1910.147(d)(6)); overrides have none to give. */
+const proofCell = (proved: boolean | null) => (proved === null ? '' : proved ? 'Proved' : 'Not proved');
+
 /** UTF-8 with a byte-order mark so spreadsheet programs read accents; cells guarded against formula injection. */
 export function writeBoardCsv(rows: BoardRow[], publicUrl: string): string {
   const lines = rows.map((r) => [
     r.siteName, r.plantRoomName ?? '', r.plantId, r.assetName, r.kind, r.reason, r.holder.name,
-    siteTime(r.raisedAt, r.timeZone), siteTime(r.expiresAt, r.timeZone), r.timeZone, BOARD_STATE_LABELS[r.state], r.contactPhone, `${publicUrl}/tags/${r.id}`,
+    siteTime(r.raisedAt, r.timeZone), siteTime(r.expiresAt, r.timeZone), r.timeZone, BOARD_STATE_LABELS[r.state], proofCell(r.proved), r.contactPhone, `${publicUrl}/tags/${r.id}`,
   ].map(guardCell));
   return `\uFEFF${stringify([[...BOARD_CSV_COLUMNS], ...lines], { record_delimiter: '\r\n' })}`;
 }

@@ -1,7 +1,8 @@
 /** Actions on one live tag by its holder or a supervisor: prove, clear, clear in absence, extend, notes, photos. Hand-over: tag-handover.service.ts. */
 import type { Sequelize, Transaction } from 'sequelize';
 import { clock } from '@/server/lib/clock';
-import { HttpError, forbidden, notFound, unprocessable } from '@/server/lib/http-error';
+import { requireTagRules } from '@/server/lib/tag-rules';
+import { HttpError, forbidden, notFound } from '@/server/lib/http-error';
 import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
 import type { PhotoStorage } from '@/server/lib/photo-storage';
 import { Tag } from '@/server/models/tag.model';
@@ -12,8 +13,7 @@ import { createNotice, requireNoPendingNotices } from '@/server/services/tag-not
 import { getTag } from '@/server/services/tags.service';
 import { enqueueTagMail } from '@/server/mail/tag-mail';
 import { clearancePermission, mayExtend } from '@/shared/rules/permissions';
-import { expiryProblem } from '@/shared/rules/tags';
-import type { ClearInAbsenceInput, ClearTagInput, ExtendTagInput, ProofInput } from '@/shared/schemas/tags';
+import { clearInAbsenceSchema, clearTagSchema, extendTagSchema, type ClearInAbsenceInput, type ClearTagInput, type ExtendTagInput, type ProofInput } from '@/shared/schemas/tags';
 import type { Tag as TagDto } from '@/shared/types/tags';
 
 /** Locks the tag row for the rest of the transaction; another organisation's tag is a 404. */
@@ -47,13 +47,9 @@ export async function recordProof(tag: Tag, actor: AuthUser, proof: ProofInput, 
   await appendEvent(tag, 'proved', actor, { proofId: row.id, method: proof.method, instrument: proof.instrument, reading: proof.reading, note: proof.note }, transaction, idem);
 }
 
-const releaseChecksMissing = (checks: ClearTagInput['checks']) => Object.entries(checks).filter(([, v]) => !v).map(([k]) => k);
-
-function requireReleaseChecks(tag: Tag, checks: ClearTagInput['checks']) {
-  if (tag.kind !== 'isolation') return;
-  const missing = releaseChecksMissing(checks);
-  if (missing.length) throw unprocessable('Confirm every release check before clearing an isolation.', Object.fromEntries(missing.map((k) => [`checks.${k}`, 'Confirm this before clearing.'])));
-}
+// The release checks an isolation needs are the clearance schema's rule for `kind: 'isolation'` (shared/schemas/tags.ts).
+const requireReleaseChecks = (schema: typeof clearTagSchema | typeof clearInAbsenceSchema, tag: Tag, input: ClearTagInput) =>
+  requireTagRules(schema, input, { kind: tag.kind }, 'Confirm every release check before clearing an isolation.');
 
 /**
  * Clears a tag by its holder. An isolation also needs every release check ticked (OSHA 29 CFR 1910.147(e)(1)–(e)(2)).
@@ -65,7 +61,7 @@ export async function clearTag(sequelize: Sequelize, actor: AuthUser, id: number
     if (permission === 'in-absence') throw forbidden('Only the holder can clear this tag. As a supervisor you can use clearance in absence.');
     if (permission !== 'own') throw forbidden('Only the person who holds this tag can clear it.');
     await requireNoPendingNotices(actor, transaction);
-    requireReleaseChecks(tag, input.checks);
+    await requireReleaseChecks(clearTagSchema, tag, input);
     await tag.update({ status: 'cleared', clearedAt: clock.now(), clearedById: actor.id, clearance: 'normal', checks: input.checks, offerToId: null, offerLapsesAt: null }, { transaction });
     await appendEvent(tag, 'cleared', actor, { reason: input.reason, checks: input.checks }, transaction, idem);
     await enqueueTagMail('cleared', tag, actor, transaction, { reason: input.reason });
@@ -83,7 +79,7 @@ export async function clearInAbsence(sequelize: Sequelize, actor: AuthUser, id: 
     if (permission === 'own') throw new HttpError(409, 'own-tag', 'This is your own tag: clear it normally.');
     if (permission !== 'in-absence') throw forbidden('Only a supervisor can clear a tag in the holder’s absence.');
     await requireNoPendingNotices(actor, transaction);
-    requireReleaseChecks(tag, input.checks);
+    await requireReleaseChecks(clearInAbsenceSchema, tag, input);
     await tag.update({ status: 'cleared', clearedAt: clock.now(), clearedById: actor.id, clearance: 'in-absence', checks: input.checks, offerToId: null, offerLapsesAt: null }, { transaction });
     await appendEvent(tag, 'cleared-in-absence', actor, {
       reason: input.reason,
@@ -103,8 +99,7 @@ export async function extendTag(sequelize: Sequelize, actor: AuthUser, id: numbe
     if (!mayExtend(actor, tag)) throw forbidden('Only the holder or a supervisor can extend this tag.');
     await requireNoPendingNotices(actor, transaction);
     const expiresAt = new Date(input.expiresAt);
-    const problem = expiryProblem(expiresAt, clock.now(), actor.role);
-    if (problem) throw unprocessable('Check the new expiry.', { expiresAt: problem });
+    await requireTagRules(extendTagSchema, input, { role: actor.role, now: clock.now() }, 'Check the new expiry.');
     const previous = tag.expiresAt.toISOString();
     await tag.update({ expiresAt }, { transaction });
     await appendEvent(tag, 'extended', actor, { reason: input.reason, from: previous, to: expiresAt.toISOString() }, transaction, idem);

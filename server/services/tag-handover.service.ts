@@ -1,6 +1,7 @@
 /** Moving a live tag to another holder: offer, withdraw and accept between two people present, or reassignment in the holder's absence. */
 import type { Sequelize, Transaction } from 'sequelize';
 import { clock } from '@/server/lib/clock';
+import { requireTagRules } from '@/server/lib/tag-rules';
 import { HttpError, forbidden, unprocessable } from '@/server/lib/http-error';
 import type { AuthUser } from '@/server/middleware/auth';
 import type { Tag } from '@/server/models/tag.model';
@@ -11,7 +12,7 @@ import { actOnTag } from '@/server/services/tag-actions.service';
 import { enqueueTagMail } from '@/server/mail/tag-mail';
 import { handoverRole, offerIsOpen, offerLapsesAt } from '@/shared/rules/tag-handover';
 import { may, mayReassignInAbsence } from '@/shared/rules/permissions';
-import type { HandoverAcceptInput, HandoverOfferInput, ReassignInAbsenceInput } from '@/shared/schemas/tags';
+import { handoverAcceptSchema, reassignInAbsenceSchema, type HandoverAcceptInput, type HandoverOfferInput, type ReassignInAbsenceInput } from '@/shared/schemas/tags';
 import type { Tag as TagDto } from '@/shared/types/tags';
 
 const offerOf = (tag: Tag) => ({ toUserId: tag.offerToId ?? null, lapsesAt: tag.offerLapsesAt ?? null });
@@ -75,7 +76,7 @@ export function acceptHandover(sequelize: Sequelize, actor: AuthUser, id: number
       if (tag.offerToId === actor.id) throw new HttpError(409, 'offer-lapsed', 'This hand-over offer has lapsed. Ask the holder to offer it again while you are both there.');
       await refuseOthers(tag, transaction);
     }
-    if (tag.kind === 'isolation' && !input.lockNumber) throw unprocessable('Give the number of the lock you have just put on.', { lockNumber: 'Put your own lock on first, then give its number.' });
+    await requireTagRules(handoverAcceptSchema, input, { kind: tag.kind }, 'Give the number of the lock you have just put on.');
     await requireNoPendingNotices(actor, transaction);
     const from = await holderOf(tag, transaction);
     const fromLockNumber = tag.lockNumber;
@@ -104,7 +105,7 @@ export function reassignInAbsence(sequelize: Sequelize, actor: AuthUser, id: num
     }
     await requireNoPendingNotices(actor, transaction);
     if (input.toUserId === tag.holderId) throw unprocessable('Choose someone other than the absent holder.', { toUserId: 'Choose someone other than the absent holder.' });
-    if (tag.kind === 'isolation' && !input.lockNumber) throw unprocessable('Give the number of the new holder’s lock, put on before the absent holder’s lock is removed.', { lockNumber: 'The new holder’s lock number.' });
+    await requireTagRules(reassignInAbsenceSchema, input, { kind: tag.kind }, 'Give the number of the new holder’s lock, put on before the absent holder’s lock is removed.');
     const to = await colleague(actor, input.toUserId, 'toUserId', transaction);
     const from = await holderOf(tag, transaction);
     const fromLockNumber = tag.lockNumber;

@@ -1,6 +1,7 @@
 /** Raising a tag: the checks an isolation must pass (every energy source accounted for) and the new tag with its points. */
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import { clock } from '@/server/lib/clock';
+import { requireTagRules } from '@/server/lib/tag-rules';
 import { HttpError, notFound, unprocessable } from '@/server/lib/http-error';
 import { ensurePermission, type AuthUser } from '@/server/middleware/auth';
 import { Asset } from '@/server/models/asset.model';
@@ -14,8 +15,7 @@ import { requireNoPendingNotices } from '@/server/services/tag-notices.service';
 import { getTag } from '@/server/services/tags.service';
 import { ENERGY_SOURCE_LABELS } from '@/shared/rules/register';
 import { sourcesNotAccounted } from '@/shared/rules/tag-isolation';
-import { expiryProblem } from '@/shared/rules/tags';
-import type { RaiseTagInput } from '@/shared/schemas/tags';
+import { raiseTagSchema, type RaiseTagInput } from '@/shared/schemas/tags';
 import type { Tag as TagDto } from '@/shared/types/tags';
 
 async function findAsset(actor: AuthUser, assetId: number, transaction?: Transaction) {
@@ -37,8 +37,7 @@ export async function raiseTag(sequelize: Sequelize, actor: AuthUser, assetId: n
     if (asset.archivedAt) throw new HttpError(409, 'archived', 'This item is archived; tags cannot be raised on it.');
     const now = clock.now();
     const expiresAt = new Date(input.expiresAt);
-    const expiry = expiryProblem(expiresAt, now, actor.role);
-    if (expiry) throw unprocessable('Check the expiry.', { expiresAt: expiry });
+    await requireTagRules(raiseTagSchema, input, { role: actor.role, now }, 'Check the expiry.');
     if (input.kind === 'isolation') await checkIsolation(actor, asset, input);
     return sequelize.transaction(async (transaction) => {
       const isolation = input.kind === 'isolation';

@@ -1,7 +1,33 @@
 import * as yup from 'yup';
-import { ENERGY_SOURCES } from '@/shared/rules/register';
-import { ISOLATION_METHODS, MIN_CLEARANCE_REASON, MIN_RAISE_REASON, RELEASE_CHECKS, TAG_KINDS } from '@/shared/rules/tags';
-import { MIN_OMISSION_REASON, PROOF_METHODS, PROOF_NEEDS_INSTRUMENT, type ProofMethod } from '@/shared/rules/tag-isolation';
+import { ENERGY_SOURCES, ENERGY_SOURCE_LABELS, type EnergySource } from '@/shared/rules/register';
+import type { Role } from '@/shared/rules/roles';
+import { ISOLATION_METHODS, MIN_CLEARANCE_REASON, MIN_RAISE_REASON, RELEASE_CHECKS, TAG_KINDS, expiryProblem, type TagKind } from '@/shared/rules/tags';
+import { MIN_OMISSION_REASON, PROOF_METHODS, PROOF_NEEDS_INSTRUMENT, sourcesNotAccounted, type OmittedSource, type ProofMethod } from '@/shared/rules/tag-isolation';
+
+/**
+ * What the rules below may depend on besides the body, passed as yup context (`schema.validate(body, { context })`):
+ * the kind of the tag acted on, the actor's role and the time now (the server's clock on the server), the tag's
+ * current expiry, the energy sources recorded on the item. A rule whose context is not given is not applied.
+ */
+export interface TagRuleContext {
+  kind?: TagKind;
+  role?: Role;
+  now?: Date;
+  currentExpiry?: string;
+  itemSources?: readonly EnergySource[];
+}
+const ruleContext = (ctx: yup.TestContext) => (ctx.options.context ?? {}) as TagRuleContext;
+
+/** An expiry in the future and within what the actor's role may set. */
+const expiryField = (required: string) => yup.date().typeError('Give a valid expiry date and time.').required(required)
+  .test('expiry-limit', 'Check the expiry.', function (value) {
+    const { role, now } = ruleContext(this);
+    const problem = role && value ? expiryProblem(value, now ?? new Date(), role) : null;
+    return problem ? this.createError({ message: problem }) : true;
+  });
+
+/** Only for an isolation: a field that must be given (a lock number) or a check that must be confirmed. */
+const forIsolation = <S extends yup.AnySchema>(schema: S, then: (s: S) => S): S => schema.when('$kind', { is: 'isolation', then }) as S;
 
 const reasonText = (min: number, what: string) =>
   yup.string().trim().required(`State the reason for ${what}.`).min(min, `At least ${min} characters: say what and why.`).max(2000);
@@ -37,12 +63,21 @@ const omittedSourceSchema = yup.object({
 export const raiseTagSchema = yup.object({
   kind: yup.string().oneOf([...TAG_KINDS], 'Choose isolation or override.').required('Choose isolation or override.'),
   reason: reasonText(MIN_RAISE_REASON, 'this tag'),
-  expiresAt: yup.date().typeError('Give a valid expiry date and time.').required('Give an expiry.'),
+  expiresAt: expiryField('Give an expiry.'),
   contactPhone: yup.string().trim().max(40).default(''),
   lockNumber: lockNumberText().default('')
     .when('kind', { is: 'isolation', then: (s) => s.required('Give the number of your personal lock.') }),
   energySources: yup.array(yup.string().oneOf([...ENERGY_SOURCES]).required()).default([])
-    .when('kind', { is: 'isolation', then: (s) => s.min(1, 'Choose at least one energy source that is isolated.') }),
+    .when('kind', { is: 'isolation', then: (s) => s.min(1, 'Choose at least one energy source that is isolated.') })
+    // OSHA 29 CFR 1910.147(d)(3)–(d)(4): every source recorded on the item is isolated or left out with a reason.
+    .test('every-source', 'Isolate each energy source, or say why it needs no isolation.', function (isolated) {
+      const { itemSources } = ruleContext(this);
+      const parent = this.parent as { kind?: string; omittedSources?: OmittedSource[] };
+      if (parent.kind !== 'isolation' || !itemSources || !isolated?.length) return true;
+      const missing = sourcesNotAccounted(itemSources, isolated as EnergySource[], parent.omittedSources ?? []);
+      if (!missing.length) return true;
+      return this.createError({ message: `Not accounted for: ${missing.map((m) => ENERGY_SOURCE_LABELS[m]).join(', ')}. Isolate each one, or say why it needs no isolation.` });
+    }),
   omittedSources: yup.array(omittedSourceSchema).default([]),
   proof: proofSchema.nullable().default(null),
   points: yup.array(tagPointSchema).default([])
@@ -54,11 +89,13 @@ export const raiseTagSchema = yup.object({
 });
 export type RaiseTagInput = yup.InferType<typeof raiseTagSchema>;
 
+// OSHA 29 CFR 1910.147(e)(1)–(e)(2): an isolation comes off only once each release check is confirmed.
+const releaseCheck = () => forIsolation(yup.boolean().default(false), (s) => s.oneOf([true], 'Confirm this before clearing.'));
 const releaseChecks = yup.object({
-  workComplete: yup.boolean().default(false),
-  guardsRefitted: yup.boolean().default(false),
-  personnelClear: yup.boolean().default(false),
-  testedSafe: yup.boolean().default(false),
+  workComplete: releaseCheck(),
+  guardsRefitted: releaseCheck(),
+  personnelClear: releaseCheck(),
+  testedSafe: releaseCheck(),
 });
 // Keep the schema's keys and the shared list of release checks in step.
 void (RELEASE_CHECKS satisfies readonly (keyof yup.InferType<typeof releaseChecks>)[]);
@@ -87,12 +124,16 @@ export const reassignInAbsenceSchema = yup.object({
   reason: reasonText(MIN_CLEARANCE_REASON, 'reassigning this tag'),
   ...absenceEvidence,
   toUserId: yup.number().typeError('Choose the colleague who takes the tag.').integer().positive().required('Choose the colleague who takes the tag.'),
-  lockNumber: lockNumberText().default(''),
+  lockNumber: forIsolation(lockNumberText().default(''), (s) => s.required('The new holder’s lock number.')),
 });
 export type ReassignInAbsenceInput = yup.InferType<typeof reassignInAbsenceSchema>;
 
 export const extendTagSchema = yup.object({
-  expiresAt: yup.date().typeError('Give a valid expiry date and time.').required('Give the new expiry.'),
+  expiresAt: expiryField('Give the new expiry.')
+    .test('changed', 'Choose a new expiry.', function (value) {
+      const { currentExpiry } = ruleContext(this);
+      return !currentExpiry || !value || value.getTime() !== Date.parse(currentExpiry);
+    }),
   reason: reasonText(MIN_RAISE_REASON, 'extending'),
 });
 export type ExtendTagInput = yup.InferType<typeof extendTagSchema>;
@@ -106,7 +147,7 @@ export type HandoverOfferInput = yup.InferType<typeof handoverOfferSchema>;
 
 /** The named colleague accepts with the number of the lock they have just put on (before the old one comes off). */
 export const handoverAcceptSchema = yup.object({
-  lockNumber: lockNumberText().default(''),
+  lockNumber: forIsolation(lockNumberText().default(''), (s) => s.required('Put your own lock on first, then give its number.')),
   contactPhone: yup.string().trim().max(40).default(''),
 });
 export type HandoverAcceptInput = yup.InferType<typeof handoverAcceptSchema>;

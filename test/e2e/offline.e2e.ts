@@ -1,6 +1,6 @@
-import type { Page } from 'playwright-core';
+import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it, onTestFailed } from 'vitest';
-import { PHONE, launch, openPage, screenshot, signIn, type Session } from '@/test/e2e/support/browser';
+import { DESKTOP, PHONE, expectClean, launch, openPage, screenshot, signIn, type Session } from '@/test/e2e/support/browser';
 import { api, apiToken } from '@/test/e2e/support/api';
 import type { Asset } from '@/shared/types/register';
 import type { ReadingList } from '@/shared/types/readings';
@@ -15,6 +15,8 @@ let item: Asset;
 const tagsOn = async (assetId: number) => (await api<ListResponse<Tag>>(baseUrl, token, `/tags?assetId=${assetId}&pageSize=200`)).items;
 const readingsOn = async (assetId: number) => (await api<ReadingList>(baseUrl, token, `/assets/${assetId}/readings?pageSize=200`)).items;
 const notesOn = async (tagId: number) => (await api<Tag>(baseUrl, token, `/tags/${tagId}`)).events!.filter((e) => e.type === 'note-added');
+// The console errors Chromium logs for requests made with no signal; nothing else may appear.
+const NO_SIGNAL_NOISE = [/ERR_INTERNET_DISCONNECTED/, /Failed to load resource/, /Failed to fetch/];
 const inHours = (h: number) => new Date(Date.now() + h * 3600_000).toISOString();
 
 /** An override raised by the engineer with a signal (through the API), as if earlier in the visit. */
@@ -42,6 +44,24 @@ function readOutbox(page: Page): Promise<{ key: string; value: Record<string, un
         };
       }),
   );
+}
+
+/** A phone signed in as the engineer, with a screenshot of what it showed if a later step fails. */
+async function engineerPhone() {
+  const watched = await openPage(session.browser, PHONE);
+  onTestFailed(async () => { await screenshot(watched.page, `offline-failed-${Date.now()}`); });
+  await signIn(watched.page, baseUrl, 'engineer2@example.test');
+  await watched.page.getByTestId('home-engineer').waitFor();
+  return watched;
+}
+
+/** Opens a screen with a signal, then waits until the service worker controls the page and the cache is on the device. */
+async function openWithSignal(page: Page, path: string, shown: (page: Page) => Locator) {
+  await page.goto(`${baseUrl}${path}`);
+  await shown(page).waitFor();
+  await page.evaluate(async () => { await navigator.serviceWorker.ready; });
+  await page.waitForFunction(() => !!navigator.serviceWorker.controller);
+  await cacheWritten(page);
 }
 
 function putOutboxEntry(page: Page, entry: { key: string; value: Record<string, unknown> }) {
@@ -75,22 +95,13 @@ describe('in a plant room with no signal, on a phone', () => {
   it('opens a record seen earlier, queues a tag, a reading and a note, and sends each once when the signal returns', async () => {
     const earlier = await raiseOverride(item.id, 'Pump held on hand for the commissioning engineer');
     const readingsBefore = (await readingsOn(item.id)).length;
-    const { page, context, errors, offsite } = await openPage(session.browser, PHONE);
-    // What the phone showed when a step failed.
-    onTestFailed(async () => { await screenshot(page, `offline-failed-${Date.now()}`); });
-    await signIn(page, baseUrl, 'engineer2@example.test');
-    await page.getByTestId('home-engineer').waitFor();
+    const phone = await engineerPhone();
+    const { page, context } = phone;
     // The tag raised earlier is opened with a signal too, so a note can be added to it below ground.
-    await page.goto(`${baseUrl}/tags/${earlier.id}`);
-    await page.getByTestId('tag-header').waitFor();
-    await cacheWritten(page);
+    await openWithSignal(page, `/tags/${earlier.id}`, (p) => p.getByTestId('tag-header'));
     // The label opens the record with a signal; the service worker takes control and precaches the app meanwhile.
-    await page.goto(`${baseUrl}/l/${item.labelCode}`);
+    await openWithSignal(page, `/l/${item.labelCode}`, (p) => p.getByTestId('asset-readings'));
     await page.getByTestId('asset-state-banner').waitFor();
-    await page.evaluate(async () => { await navigator.serviceWorker.ready; });
-    await page.waitForFunction(() => !!navigator.serviceWorker.controller);
-    await page.getByTestId('asset-readings').waitFor();
-    await cacheWritten(page);
 
     await context.setOffline(true);
     await page.reload();
@@ -188,8 +199,7 @@ describe('in a plant room with no signal, on a phone', () => {
       await oneOfEach();
     }
     // Chromium reports the failed requests of the offline reload as console errors; nothing else may appear.
-    expect(errors.filter((e) => !/ERR_INTERNET_DISCONNECTED|Failed to load resource|Failed to fetch/.test(e))).toEqual([]);
-    expect(offsite).toEqual([]);
+    expectClean(phone, NO_SIGNAL_NOISE);
     await context.close();
   });
 
@@ -200,19 +210,11 @@ describe('in a plant room with no signal, on a phone', () => {
     expect(other).toBeDefined();
     const tag = await raiseOverride(item.id, 'Pump left running on hand for the flushing contractor');
 
-    const { page, context, errors, offsite } = await openPage(session.browser, PHONE);
-    // What the phone showed when a step failed.
-    onTestFailed(async () => { await screenshot(page, `offline-failed-${Date.now()}`); });
-    await signIn(page, baseUrl, 'engineer2@example.test');
-    await page.getByTestId('home-engineer').waitFor();
+    const phone = await engineerPhone();
+    const { page, context } = phone;
     // With a signal: the plant room (its list of items) and the tag. The other item's own record is never opened.
-    await page.goto(`${baseUrl}/plant-rooms/${item.plantRoomId}`);
-    await page.getByText(`${other.plantId}`, { exact: false }).first().waitFor();
-    await page.evaluate(async () => { await navigator.serviceWorker.ready; });
-    await page.goto(`${baseUrl}/tags/${tag.id}`);
-    await page.getByTestId('tag-header').waitFor();
-    await page.waitForFunction(() => !!navigator.serviceWorker.controller);
-    await cacheWritten(page);
+    await openWithSignal(page, `/plant-rooms/${item.plantRoomId}`, (p) => p.getByText(other.plantId, { exact: false }).first());
+    await openWithSignal(page, `/tags/${tag.id}`, (p) => p.getByTestId('tag-header'));
 
     // No signal: the label on the other item is scanned (its address opened) and its record opens from the room's list.
     await context.setOffline(true);
@@ -242,6 +244,9 @@ describe('in a plant room with no signal, on a phone', () => {
     await expect(page.getByTestId('pending-entry').innerText()).resolves.toMatch(/This tag has already been cleared\./);
     await expect(page.getByTestId('pending-banner').innerText()).resolves.toMatch(/1 refused/);
     await screenshot(page, 'offline-pending-refused-phone');
+    await page.setViewportSize(DESKTOP);
+    await screenshot(page, 'offline-pending-refused-desktop');
+    await page.setViewportSize(PHONE);
     // The one clearance on record is the terminal's; the refused one wrote nothing.
     const events = (await api<Tag>(baseUrl, token, `/tags/${tag.id}`)).events!.filter((e) => e.type === 'cleared');
     expect(events).toHaveLength(1);
@@ -253,8 +258,38 @@ describe('in a plant room with no signal, on a phone', () => {
     await page.getByTestId('pending-remove').click();
     await page.getByText('Nothing is waiting on this device.').waitFor();
     expect(await readOutbox(page)).toEqual([]);
-    expect(errors.filter((e) => !/ERR_INTERNET_DISCONNECTED|Failed to load resource|Failed to fetch/.test(e))).toEqual([]);
-    expect(offsite).toEqual([]);
+    expectClean(phone, NO_SIGNAL_NOISE);
+    await context.close();
+  });
+
+  it('keeps the queue when the session ends with no signal, and sends it after the next sign-in', async () => {
+    const tag = await raiseOverride(item.id, 'Pump on hand while the pressure switch is swapped');
+    const phone = await engineerPhone();
+    const { page, context } = phone;
+    await openWithSignal(page, `/tags/${tag.id}`, (p) => p.getByTestId('tag-header'));
+
+    await context.setOffline(true);
+    await page.reload();
+    await page.getByTestId('tag-action-note').click();
+    await page.getByTestId('note-text').fill('Pressure switch fitted; waiting for the controls engineer');
+    await page.getByTestId('note-submit').click();
+    await page.getByTestId('action-refusal').getByText(/waiting to send/i).waitFor();
+
+    // Meanwhile the session ends (signed out everywhere from the office), so the signal comes back to a dead session.
+    expect((await fetch(`${baseUrl}/api/auth/logout`, { method: 'POST', headers: { Authorization: `Bearer ${token}` } })).status).toBe(204);
+    token = await apiToken(baseUrl, 'engineer2@example.test');
+    await context.setOffline(false);
+    await page.waitForURL('**/sign-in**', { timeout: 30_000 });
+    const kept = await readOutbox(page);
+    expect(kept.map((e) => [e.value.kind, e.value.state])).toEqual([['tag-note', 'waiting']]);
+    expect(await notesOn(tag.id)).toHaveLength(0);
+
+    // Signed in again: the note goes, once.
+    await signIn(page, baseUrl, 'engineer2@example.test');
+    await page.getByTestId('home-engineer').waitFor();
+    await expect.poll(() => notesOn(tag.id), { timeout: 30_000 }).toHaveLength(1);
+    await expect.poll(() => readOutbox(page)).toEqual([]);
+    expectClean(phone, NO_SIGNAL_NOISE);
     await context.close();
   });
 });

@@ -14,6 +14,7 @@ import { TagNoticesBanner } from '@/components/tags/tag-notices-banner';
 import { TagTimeline } from '@/components/tags/tag-timeline';
 import { useNow } from '@/components/tags/use-now';
 import { useMeQuery } from '@/hooks/api/use-auth';
+import { usePermissions } from '@/hooks/auth/use-permissions';
 import { PhotoGallery } from '@/components/register/photo-gallery';
 import { useAddTagPhotoMutation, useTagQuery } from '@/hooks/api/use-tags';
 
@@ -21,6 +22,7 @@ export default function TagScreen() {
   const params = useLocalSearchParams<{ id: string }>();
   const tag = useTagQuery(Number(params.id) || 0);
   const me = useMeQuery().data;
+  const { may, mayOn } = usePermissions();
   const now = useNow();
   const { isWide } = useBreakpoints();
   const addPhoto = useAddTagPhotoMutation(Number(params.id) || 0);
@@ -36,7 +38,7 @@ export default function TagScreen() {
           </Card>
         );
         const actions = me ? <TagActions tag={t} me={me} now={now} /> : null;
-        const canAddPhoto = t.status === 'live' && !!me && me.role !== 'viewer';
+        const canAddPhoto = mayOn('addTagPhoto', { status: t.status, holderId: t.holder.id });
         const photos = (
           <Card>
             <Text variant="title">Photos of the lock or tag</Text>
@@ -47,7 +49,7 @@ export default function TagScreen() {
         const live = t.status === 'live';
         return (
           <Screen>
-            {me && me.role !== 'viewer' ? <TagNoticesBanner /> : null}
+            {may('raiseTag') ? <TagNoticesBanner /> : null}
             <TagHeader tag={t} now={now} />
             <PendingForRecord tagId={t.id} />
             {isWide ? (

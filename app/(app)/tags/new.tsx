@@ -12,8 +12,8 @@ import { useMeQuery } from '@/hooks/api/use-auth';
 import { useIsolationPlanQuery } from '@/hooks/api/use-connections';
 import { useSiteQuery } from '@/hooks/api/use-sites';
 import { ENERGY_SOURCES, type EnergySource } from '@/shared/rules/register';
-import { may } from '@/shared/rules/permissions';
 import type { TagKind } from '@/shared/rules/tags';
+import { usePermissions } from '@/hooks/auth/use-permissions';
 
 export default function RaiseTagScreen() {
   const params = useLocalSearchParams<{ assetId?: string; kind?: string; planSources?: string }>();
@@ -23,6 +23,7 @@ export default function RaiseTagScreen() {
   const asset = useAssetQuery(assetId);
   const site = useSiteQuery(asset.data?.siteId ?? 0);
   const me = useMeQuery().data;
+  const { may } = usePermissions();
   // Opened from an isolation plan: the same plan again, to fill the form's sources and points.
   const planSources = (params.planSources ?? '').split(',').filter((s): s is EnergySource => (ENERGY_SOURCES as readonly string[]).includes(s));
   const plan = useIsolationPlanQuery(assetId, planSources, kind === 'isolation' && planSources.length > 0);
@@ -40,13 +41,14 @@ export default function RaiseTagScreen() {
       {(item) => {
         const title = 'Raise a tag';
         const subtitle = `${item.plantId} · ${item.name} · ${item.siteName}`;
-        if (!me || !may(me, 'raiseTag')) {
+        if (!me || !may('raiseTag')) {
           return <Screen title={title} subtitle={subtitle}><Notice tone="info" word="Read only">Viewers cannot raise tags.</Notice></Screen>;
         }
         if (item.archived) {
           return <Screen title={title} subtitle={subtitle}><Notice tone="info" word="Archived">This item is archived, so no tags can be raised on it.</Notice></Screen>;
         }
-        if (site.isError) {
+        // A site kept from an earlier visit serves with no signal, as the item does; only with none is it an error.
+        if (site.isError && !site.data) {
           return <Screen title={title} subtitle={subtitle}><Notice tone="danger" word="Cannot load the site">{errorMessage(site.error)}</Notice></Screen>;
         }
         if (!site.data || (plan.isFetching && !plan.data)) return <LoadingView />;

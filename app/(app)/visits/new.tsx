@@ -1,4 +1,5 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
+import { safeNext } from '@/components/auth/safe-next';
 import { Card } from '@/components/ui/card';
 import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
@@ -19,7 +20,7 @@ export default function NewVisitScreen() {
             <Text muted>What you do here while the visit is open — readings, tags, notes, photos — is gathered into its record. When you leave, you decide what happens to each live tag you hold on this site.</Text>
             <StartVisitForm
               siteId={siteId}
-              onStarted={() => router.replace((params.next || `/sites/${siteId}`) as never)}
+              onStarted={() => router.replace(params.next ? safeNext(params.next) : `/sites/${siteId}`)}
               onCancel={() => router.back()}
             />
           </Card>

@@ -155,10 +155,10 @@ describe('GET /api/board.csv', () => {
     expect(res.headers['content-type']).toMatch(/text\/csv/);
     expect(res.headers['content-disposition']).toMatch(/attachment; filename="isoledger-board-/);
     const lines = res.text.replace(/^\uFEFF/, '').trim().split('\r\n');
-    expect(lines[0]).toBe('Site,Plant room,Plant ID,Item,Kind,Reason,Holder,Raised (site time),Expires (site time),Time zone,State,Contact phone,Tag');
+    expect(lines[0]).toBe('Site,Plant room,Plant ID,Item,Kind,Reason,Holder,Raised (site time),Expires (site time),Time zone,State,Proof of isolation,Contact phone,Tag');
     expect(lines).toHaveLength(3);
     // 2025-03-04 09:00 UTC is 04:00 in New York (EST, UTC−5, until the second Sunday of March) — IANA tz database via Intl.
-    expect(lines[1]).toBe(`Beech House,,B-01,Boiler 1,isolation,Burner service 100% strip-down,oak engineer,2025-03-03 09:00,2025-03-04 04:00,America/New_York,Past expiry,'+44 7700 900111,${t.config.publicUrl}/tags/${tags.overdueBeech.id}`);
+    expect(lines[1]).toBe(`Beech House,,B-01,Boiler 1,isolation,Burner service 100% strip-down,oak engineer,2025-03-03 09:00,2025-03-04 04:00,America/New_York,Past expiry,Not proved,'+44 7700 900111,${t.config.publicUrl}/tags/${tags.overdueBeech.id}`);
     expect(lines[2]).toContain(`/tags/${tags.liveBeech.id}`);
   });
 });

@@ -17,7 +17,7 @@ import { ItemOffline } from '@/components/offline/pending-actions';
 import { AssetReadingsSection } from '@/components/readings/asset-readings-section';
 import { AssetDetails } from '@/components/register/asset-details';
 import { AssetStateSlot } from '@/components/register/asset-state-slot';
-import { Breadcrumbs } from '@/components/register/breadcrumbs';
+import { Breadcrumbs, type Crumb } from '@/components/register/breadcrumbs';
 import { PhotoGallery } from '@/components/register/photo-gallery';
 import { ASSET_TYPE_ICONS } from '@/components/register/register-vocabulary';
 import { errorMessage } from '@/hooks/api/request';
@@ -41,7 +41,7 @@ export default function AssetScreen() {
   return (
     <QueryScreen query={asset} title="Plant item">
       {(a) => {
-        const trail = [{ label: 'Register', href: '/assets' }, { label: a.siteName, href: `/sites/${a.siteId}` }];
+        const trail: Crumb[] = [{ label: 'Register', href: '/assets' }, { label: a.siteName, href: `/sites/${a.siteId}` }];
         if (a.plantRoomId) trail.push({ label: a.plantRoomName ?? 'Plant room', href: `/plant-rooms/${a.plantRoomId}` });
         const canEdit = perms.canEditRecord(a.createdBy) && !a.archived;
         return (
