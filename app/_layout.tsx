@@ -1,5 +1,4 @@
-import { AtkinsonHyperlegible_400Regular, AtkinsonHyperlegible_700Bold } from '@expo-google-fonts/atkinson-hyperlegible';
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { useFonts } from 'expo-font';
 import { Slot } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
@@ -19,8 +18,6 @@ export default function RootLayout() {
     AtkinsonHyperlegible_700Bold: require('@/assets/fonts/AtkinsonHyperlegible_700Bold.ttf'),
     ...MaterialCommunityIcons.font,
   });
-  void AtkinsonHyperlegible_400Regular;
-  void AtkinsonHyperlegible_700Bold;
   useEffect(registerServiceWorker, []);
   return (
     <SafeAreaProvider>

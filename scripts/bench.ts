@@ -104,9 +104,9 @@ async function main() {
     closers.push(() => browser.close());
     const item = items[0];
     const pages: [string, ScriptBytes][] = [
-      ['near-blank Expo Router app (one QR code)', await scriptsBeforeFirstRender(browser, blank.url, (p) => p.getByTestId('blank-qr').waitFor())],
-      ['sign-in page', await scriptsBeforeFirstRender(browser, `${base}/sign-in`, (p) => p.getByTestId('sign-in-email').waitFor())],
-      ["a label's page (signed in)", await scriptsBeforeFirstRender(browser, `${base}/l/${item.labelCode}`, (p) => p.getByTestId('asset-state-banner').waitFor(), token)],
+      ['near-blank Expo Router app (one QR code)', await scriptsBeforeFirstRender(browser, blank.url, 'blank-qr')],
+      ['sign-in page', await scriptsBeforeFirstRender(browser, `${base}/sign-in`, 'sign-in-email')],
+      ["a label's page (signed in)", await scriptsBeforeFirstRender(browser, `${base}/l/${item.labelCode}`, 'asset-state-banner', token)],
     ];
     const reference = pages[0][1];
     for (const [name, bytes] of pages) {

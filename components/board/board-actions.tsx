@@ -1,4 +1,4 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { useState } from 'react';
 import { ActivityIndicator, View } from 'react-native';
 import { colors, space } from '@/components/theme';

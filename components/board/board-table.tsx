@@ -1,4 +1,4 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { useRouter } from 'expo-router';
 import { View } from 'react-native';
 import { colors } from '@/components/theme';

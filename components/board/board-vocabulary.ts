@@ -1,4 +1,4 @@
-import type { MaterialCommunityIcons } from '@expo/vector-icons';
+import type { MaterialCommunityIcons } from '@/components/ui/icons';
 import type { ComponentProps } from 'react';
 import { STATE_LOOK, type StateTone } from '@/components/tags/tag-vocabulary';
 import { BOARD_STATE_LABELS, type BoardState } from '@/shared/rules/board';

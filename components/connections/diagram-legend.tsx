@@ -1,4 +1,4 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { View } from 'react-native';
 import Svg, { Line } from 'react-native-svg';
 import { colors, space } from '@/components/theme';

@@ -1,4 +1,4 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { getIn, useFormikContext } from 'formik';
 import { StyleSheet, View } from 'react-native';
 import { FormTextField } from '@/components/forms/bound-fields';

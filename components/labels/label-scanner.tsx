@@ -1,6 +1,6 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { CameraView, useCameraPermissions, type BarcodeScanningResult } from 'expo-camera';
-import { useRef, useState } from 'react';
+import { use, useRef, useState } from 'react';
 import { Platform, StyleSheet, View } from 'react-native';
 import { colors, radius, space } from '@/components/theme';
 import { Button } from '@/components/ui/button';
@@ -9,10 +9,12 @@ import { Text } from '@/components/ui/text';
 import { prepareScannerWasm } from '@/components/labels/zxing-setup';
 import { useTorchSupport } from '@/components/labels/use-torch-support';
 
-prepareScannerWasm();
+const scannerReady = prepareScannerWasm();
 
 /** The camera part of the Scan tab: asks for permission, scans QR codes, offers the torch where the device has one. */
 export function LabelScanner({ onScanned, paused }: { onScanned: (text: string) => void; paused: boolean }) {
+  // Suspends (inside the lazy part's fallback) until the QR reader points at our own wasm.
+  use(scannerReady);
   const [permission, requestPermission] = useCameraPermissions();
   const [torch, setTorch] = useState(false);
   const hasTorch = useTorchSupport();

@@ -1,2 +1,4 @@
 /** Native builds scan with the platform's own barcode reader: nothing to prepare. */
-export function prepareScannerWasm() {}
+export function prepareScannerWasm(): Promise<void> {
+  return Promise.resolve();
+}

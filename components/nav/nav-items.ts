@@ -1,4 +1,4 @@
-import type { MaterialCommunityIcons } from '@expo/vector-icons';
+import type { MaterialCommunityIcons } from '@/components/ui/icons';
 import type { ComponentProps } from 'react';
 import type { Href } from 'expo-router';
 import { may, type Actor, type RolePermission } from '@/shared/rules/permissions';

@@ -1,4 +1,4 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { Link } from 'expo-router';
 import { onlineManager } from '@tanstack/react-query';
 import { useMemo, useSyncExternalStore } from 'react';

@@ -1,4 +1,4 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { Formik, getIn, setIn, type FormikErrors } from 'formik';
 import { useMemo, useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';

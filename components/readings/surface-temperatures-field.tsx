@@ -1,4 +1,4 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { getIn, useFormikContext } from 'formik';
 import { Pressable, StyleSheet, TextInput, View } from 'react-native';
 import type { ReadingFormValues } from '@/components/readings/reading-fields';

@@ -7,7 +7,7 @@ import { DetailList } from '@/components/register/detail-list';
 import { EnergyChips } from '@/components/register/energy-chips';
 import { ATTRIBUTE_META, formatDate, optionLabel } from '@/components/register/register-vocabulary';
 import { ServiceBadge } from '@/components/register/service-badge';
-import { attributeFields } from '@/components/register/asset-form-values';
+import { attributeFields } from '@/components/register/attribute-fields';
 import { ASSET_TYPE_LABELS } from '@/shared/rules/register';
 import type { Asset } from '@/shared/types/register';
 

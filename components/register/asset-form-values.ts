@@ -23,21 +23,8 @@ export interface AssetFormValues {
   attributes: Record<string, string>;
 }
 
-interface AttributeField {
-  key: string;
-  kind: 'number' | 'text' | 'choice';
-  options: string[];
-}
-
-/** The chosen type's fields, read from the shared schema so the form and the server never disagree. */
-export function attributeFields(type: AssetType | ''): AttributeField[] {
-  if (!type) return [];
-  const fields = attributeSchemas[type].describe().fields as Record<string, { type: string; oneOf?: unknown[] }>;
-  return Object.entries(fields).map(([key, d]) => {
-    const options = (d.oneOf ?? []).filter((v): v is string => typeof v === 'string' && v !== '');
-    return { key, kind: d.type === 'number' ? 'number' : options.length ? 'choice' : 'text', options };
-  });
-}
+// Read-only screens (an item's record) take this from attribute-fields.ts, which does not load the form library.
+export { attributeFields } from '@/components/register/attribute-fields';
 
 /** assetSchema with `attributes` checked by the chosen type's schema. */
 function schemaFor(type: AssetType | '') {

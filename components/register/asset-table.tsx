@@ -1,4 +1,4 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { TagStateBadge } from '@/components/tags/tag-state-badge';
 import { Link, useRouter } from 'expo-router';
 import { View } from 'react-native';

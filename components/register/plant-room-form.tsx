@@ -1,4 +1,4 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { Formik, getIn } from 'formik';
 import { View } from 'react-native';
 import { colors, space } from '@/components/theme';

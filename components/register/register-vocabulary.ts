@@ -1,4 +1,4 @@
-import type { MaterialCommunityIcons } from '@expo/vector-icons';
+import type { MaterialCommunityIcons } from '@/components/ui/icons';
 import type { ComponentProps } from 'react';
 import type { AssetType, EnergySource } from '@/shared/rules/register';
 import type { SafetyLocations } from '@/shared/types/register';

@@ -1,4 +1,4 @@
-import type { MaterialCommunityIcons } from '@expo/vector-icons';
+import type { MaterialCommunityIcons } from '@/components/ui/icons';
 import type { ComponentProps } from 'react';
 import { colors } from '@/components/theme';
 import type { AssetState, IsolationMethod, TagEventType, TagKind } from '@/shared/rules/tags';

@@ -1,4 +1,4 @@
-import type { MaterialCommunityIcons } from '@expo/vector-icons';
+import type { MaterialCommunityIcons } from '@/components/ui/icons';
 import type { ComponentProps } from 'react';
 import { ROLES, ROLE_LABELS } from '@/shared/rules/roles';
 import type { TeamMember } from '@/shared/types/team';

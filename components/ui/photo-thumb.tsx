@@ -1,4 +1,4 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { ActivityIndicator, Image, Pressable, StyleSheet, View } from 'react-native';
 import { colors, radius } from '@/components/theme';
 import { usePhotoUri } from '@/hooks/api/use-photos';

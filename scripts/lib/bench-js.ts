@@ -5,7 +5,7 @@ import express from 'express';
 import fs from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromium, type Browser } from 'playwright-core';
 import { webStatic } from '@/server/lib/web-static';
 import { precompress } from '@/scripts/lib/precompress';
 import { CHROMIUM, CHROMIUM_ARGS } from '@/test/e2e/support/chromium';
@@ -79,25 +79,46 @@ export interface ScriptBytes {
 }
 
 /**
- * Loads `url` in a fresh context with no service worker and sums the scripts fetched until `ready` is visible.
- * `prepare` may sign in first (it runs on a page of its own, whose scripts are not counted).
+ * Loads `url` in a fresh context with no service worker and sums the scripts the page requested before the element
+ * with test id `readyTestId` first appeared in the document (its first render). Parts a screen fetches after that
+ * (deferred lazy parts) are not counted; whatever was requested while the element was still missing is, even if
+ * it was not needed for it. `token` signs in first (written to local storage before the page's own scripts run).
  */
-export async function scriptsBeforeFirstRender(browser: Browser, url: string, ready: (page: Page) => Promise<void>, token?: string): Promise<ScriptBytes> {
+export async function scriptsBeforeFirstRender(browser: Browser, url: string, readyTestId: string, token?: string): Promise<ScriptBytes> {
   const context = await browser.newContext({ serviceWorkers: 'block', viewport: { width: 390, height: 844 } });
   if (token) await context.addInitScript((t) => window.localStorage.setItem('isoledger.token', t), token);
+  await context.addInitScript((id) => {
+    const w = window as unknown as { __firstRenderAt?: number };
+    const seen = () => document.querySelector(`[data-testid="${id}"]`) !== null;
+    new MutationObserver((_, observer) => {
+      if (w.__firstRenderAt === undefined && seen()) {
+        w.__firstRenderAt = performance.now();
+        observer.disconnect();
+      }
+    }).observe(document, { childList: true, subtree: true, attributes: true });
+  }, readyTestId);
   const page = await context.newPage();
   const cdp = await context.newCDPSession(page);
   await cdp.send('Network.enable');
-  const scripts = new Map<string, { url: string; transferred: number }>();
-  cdp.on('Network.responseReceived', (e) => { if (e.type === 'Script') scripts.set(e.requestId, { url: e.response.url, transferred: 0 }); });
-  cdp.on('Network.loadingFinished', (e) => { const s = scripts.get(e.requestId); if (s) s.transferred = e.encodedDataLength; });
+  const wire = new Map<string, number>();
+  const urls = new Map<string, string>();
+  cdp.on('Network.responseReceived', (e) => { if (e.type === 'Script') urls.set(e.requestId, e.response.url); });
+  cdp.on('Network.loadingFinished', (e) => { const u = urls.get(e.requestId); if (u) wire.set(u, e.encodedDataLength); });
   await page.goto(url);
-  await ready(page);
-  const counted = [...scripts.values()];
+  await page.getByTestId(readyTestId).first().waitFor();
+  const counted = await page.evaluate(() => {
+    const at = (window as unknown as { __firstRenderAt?: number }).__firstRenderAt ?? Infinity;
+    return performance
+      .getEntriesByType('resource')
+      .filter((e) => (e as PerformanceResourceTiming).initiatorType === 'script' && e.startTime <= at)
+      .map((e) => e.name);
+  });
+  // Every script the page asked for has arrived by the time it rendered; wait for the wire sizes of the last ones.
+  for (let i = 0; i < 50 && counted.some((u) => !wire.has(u)); i += 1) await page.waitForTimeout(20);
   let decoded = 0;
-  for (const s of counted) decoded += (await (await fetch(s.url, { headers: { 'Accept-Encoding': 'identity' } })).arrayBuffer()).byteLength;
+  for (const u of counted) decoded += (await (await fetch(u, { headers: { 'Accept-Encoding': 'identity' } })).arrayBuffer()).byteLength;
   await context.close();
-  return { decoded, transferred: counted.reduce((n, s) => n + s.transferred, 0), files: counted.length };
+  return { decoded, transferred: counted.reduce((n, u) => n + (wire.get(u) ?? 0), 0), files: counted.length };
 }
 
 export async function launchChromium(extraArgs: string[] = []) {

@@ -3,13 +3,14 @@ import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { precompress } from '@/scripts/lib/precompress';
+import { checkScriptSplit } from '@/scripts/lib/web-chunks';
 import { addOfflineSupport } from '@/scripts/lib/web-offline';
 import { copyZxingWasm } from '@/scripts/lib/zxing-wasm';
 
 const ROOT = path.resolve(__dirname, '../..');
 const DIST = path.join(ROOT, 'dist');
 const STAMP = path.join(DIST, '.source-hash');
-const SOURCES = ['app', 'components', 'hooks', 'shared', 'assets', 'app.json', 'package-lock.json', 'metro.config.js', 'babel.config.js', 'scripts/lib/web-build.ts', 'scripts/lib/zxing-wasm.ts', 'scripts/lib/precompress.ts', 'scripts/lib/web-offline.ts'];
+const SOURCES = ['app', 'components', 'hooks', 'shared', 'assets', 'app.json', 'package-lock.json', 'metro.config.js', 'babel.config.js', 'scripts/metro', 'scripts/lib/web-build.ts', 'scripts/lib/zxing-wasm.ts', 'scripts/lib/precompress.ts', 'scripts/lib/web-offline.ts', 'scripts/lib/web-chunks.ts'];
 
 function hashTree(hash: crypto.Hash, target: string) {
   if (!fs.existsSync(target)) return;
@@ -49,6 +50,8 @@ export async function buildWeb(log: (line: string) => void) {
  * exact installed binary into the build and the app points the library at it (components/labels/zxing-setup.web.ts).
  */
 async function afterExport(dist: string) {
+  // The split made by scripts/metro/route-chunks.js: every module a script needs is defined before it runs.
+  checkScriptSplit(dist);
   copyZxingWasm(path.join(dist, 'wasm'));
   const precached = await addOfflineSupport(dist);
   // Last, so that every file written above is compressed too.

@@ -3,6 +3,7 @@ import http from 'node:http';
 import path from 'node:path';
 import zlib from 'node:zlib';
 import { describe, expect, inject, it } from 'vitest';
+import { eagerScripts, readScriptModules, unmetRequirements } from '@/scripts/lib/web-chunks';
 
 const baseUrl = inject('baseUrl');
 const DIST = path.resolve('dist');
@@ -87,5 +88,28 @@ describe('the built web app as the server sends it', () => {
     expect(res.headers['content-encoding']).toBe('gzip');
     const items = JSON.parse(zlib.gunzipSync(res.body).toString('utf8')) as { items: unknown[] };
     expect(items.items.length).toBeGreaterThan(0);
+  });
+});
+
+describe('the scripts of the built web app', () => {
+  const scripts = path.join(DIST, '_expo/static/js/web');
+
+  it('defines every module a script requires in that script or in one index.html loads before it', () => {
+    const eager = eagerScripts(DIST);
+    expect(eager.map((f) => f.replace(/-[0-9a-f]+\.js$/, ''))).toEqual(['__expo-metro-runtime', '__common', 'entry']);
+    expect(unmetRequirements(scripts, eager)).toEqual([]);
+  });
+
+  it('keeps each screen in a script of its own, fetched only when opened', () => {
+    const eager = new Set(eagerScripts(DIST));
+    const lazy = fs.readdirSync(scripts).filter((f) => f.endsWith('.js') && !eager.has(f));
+    // The router's table of lazy routes in the entry script names each route's script.
+    const entryCode = fs.readFileSync(path.join(scripts, [...eager].find((f) => f.startsWith('entry-'))!), 'utf8');
+    const routeScripts = new Set(readScriptModules(entryCode).flatMap((m) => Object.values(m.loads).map((f) => path.basename(f))));
+    expect(routeScripts.size).toBeGreaterThan(20);
+    for (const f of routeScripts) expect(lazy).toContain(f);
+    for (const name of ['sign-in', 'board', 'diagram', 'trend-chart', 'label-scanner', 'asset-readings-section']) {
+      expect(lazy.some((f) => f.startsWith(`${name}-`))).toBe(true);
+    }
   });
 });

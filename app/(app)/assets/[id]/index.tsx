@@ -1,4 +1,4 @@
-import { MaterialCommunityIcons } from '@expo/vector-icons';
+import { MaterialCommunityIcons } from '@/components/ui/icons';
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useState } from 'react';
 import { View } from 'react-native';
@@ -12,22 +12,24 @@ import { QueryScreen } from '@/components/ui/query-screen';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { lazyPart } from '@/components/ui/lazy-part';
-import { ConnectionsCard } from '@/components/connections/connections-card';
 import { ItemOffline } from '@/components/offline/pending-actions';
-import { AssetReadingsSection } from '@/components/readings/asset-readings-section';
 import { AssetDetails } from '@/components/register/asset-details';
 import { AssetStateSlot } from '@/components/register/asset-state-slot';
 import { Breadcrumbs, type Crumb } from '@/components/register/breadcrumbs';
-import { PhotoGallery } from '@/components/register/photo-gallery';
 import { ASSET_TYPE_ICONS } from '@/components/register/register-vocabulary';
 import { errorMessage } from '@/hooks/api/request';
 import { useAddAssetPhotoMutation, useArchiveAssetMutation, useAssetQuery } from '@/hooks/api/use-assets';
+import { useTagsQuery } from '@/hooks/api/use-tags';
 import { usePermissions } from '@/hooks/auth/use-permissions';
 import { useNow } from '@/components/tags/use-now';
 import { VisitBanner } from '@/components/visits/visit-banner';
 import { ASSET_TYPE_LABELS } from '@/shared/rules/register';
 
-const AssetLabelCard = lazyPart(() => import('@/components/labels/asset-label-card').then((m) => m.AssetLabelCard));
+// Below the item's state: fetched once the state has shown, so a scanned label answers "is it isolated?" first.
+const AssetLabelCard = lazyPart(() => import('@/components/labels/asset-label-card').then((m) => m.AssetLabelCard), { deferred: true });
+const ConnectionsCard = lazyPart(() => import('@/components/connections/connections-card').then((m) => m.ConnectionsCard), { deferred: true });
+const AssetReadingsSection = lazyPart(() => import('@/components/readings/asset-readings-section').then((m) => m.AssetReadingsSection), { deferred: true });
+const PhotoGallery = lazyPart(() => import('@/components/register/photo-gallery').then((m) => m.PhotoGallery), { deferred: true });
 
 export default function AssetScreen() {
   const id = Number(useLocalSearchParams<{ id: string }>().id);
@@ -38,6 +40,8 @@ export default function AssetScreen() {
   const archive = useArchiveAssetMutation();
   const [confirming, setConfirming] = useState(false);
   const now = useNow();
+  const tags = useTagsQuery({ assetId: id });
+  const stateShown = tags.data !== undefined || tags.isError;
   return (
     <QueryScreen query={asset} title="Plant item">
       {(a) => {
@@ -66,13 +70,17 @@ export default function AssetScreen() {
             <ItemOffline asset={a} />
             {a.archived ? null : <VisitBanner siteId={a.siteId} siteName={a.siteName} next={`/assets/${id}`} now={now} />}
             <AssetDetails asset={a} />
-            <ConnectionsCard asset={a} />
-            <AssetReadingsSection asset={a} />
-            <Card>
-              <Text variant="title">Photos</Text>
-              <PhotoGallery photos={a.photos ?? []} subject={a.plantId} onAdd={perms.canAdd && !a.archived ? (p) => addPhoto.mutateAsync(p) : undefined} adding={addPhoto.isPending} />
-            </Card>
-            <AssetLabelCard asset={a} />
+            {stateShown ? (
+              <>
+                <ConnectionsCard asset={a} />
+                <AssetReadingsSection asset={a} />
+                <Card>
+                  <Text variant="title">Photos</Text>
+                  <PhotoGallery photos={a.photos ?? []} subject={a.plantId} onAdd={perms.canAdd && !a.archived ? (p) => addPhoto.mutateAsync(p) : undefined} adding={addPhoto.isPending} />
+                </Card>
+                <AssetLabelCard asset={a} />
+              </>
+            ) : null}
             <Text variant="small" muted>{`Added by ${a.createdBy.name}`}</Text>
             <ConfirmDialog
               visible={confirming}
