@@ -9,9 +9,11 @@ const WORDS: Record<number, string> = { 0: 'Not sent', 400: 'Not understood', 40
 /** A refusal in the server's own words (403 not yours, 409 someone got there first, 422 a field is wrong). */
 export function StatusBanner({ status, word, testID = 'form-status' }: { status?: FormStatus | null; word?: string; testID?: string }) {
   if (!status) return null;
+  // Queued with no signal is not a refusal: it waits in the outbox and has not happened yet.
+  const queued = status.code === 'queued';
   return (
     <View testID={testID}>
-      <Notice tone="danger" word={word ?? WORDS[status.status] ?? 'Not done'}>{status.message}</Notice>
+      <Notice tone={queued ? 'info' : 'danger'} word={queued ? 'Waiting to send' : (word ?? WORDS[status.status] ?? 'Not done')}>{status.message}</Notice>
     </View>
   );
 }

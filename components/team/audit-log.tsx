@@ -7,7 +7,8 @@ import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { AUDIT_EVENT_LABELS } from '@/components/team/team-vocabulary';
 import { errorMessage } from '@/hooks/api/request';
-import { useAuditQuery, type AuditEntry } from '@/hooks/api/use-team';
+import { useAuditQuery } from '@/hooks/api/use-team';
+import type { AuditEntry } from '@/shared/types/team';
 import { ROLE_LABELS, type Role } from '@/shared/rules/roles';
 
 const PAGE = 20;

@@ -5,20 +5,15 @@ import { RequestError, request } from '@/hooks/api/request';
 import { assetKeys } from '@/hooks/api/use-assets';
 import { sendOrQueue } from '@/hooks/offline/send-or-queue';
 import type { OutboxKind } from '@/hooks/offline/outbox-types';
-import type { TagStatus } from '@/shared/rules/tags';
 import type {
   ClearInAbsenceInput, ClearTagInput, ExtendTagInput, HandoverAcceptInput, HandoverOfferInput, ProofInput, RaiseTagInput, ReassignInAbsenceInput,
 } from '@/shared/schemas/tags';
+import type { TagListQuery } from '@/shared/schemas/queries';
 import type { Tag, TagNotice } from '@/shared/types/tags';
 import type { ListResponse } from '@/shared/types/user';
 
-export interface TagFilters {
-  assetId?: number;
-  siteId?: number;
-  status?: TagStatus;
-  /** 'me': live tags a colleague has offered to the caller. */
-  offeredTo?: 'me';
-}
+/** `GET /api/tags` filters: the shared query schema without its paging. */
+export type TagFilters = Partial<Omit<TagListQuery, 'page' | 'pageSize'>>;
 
 export const tagKeys = {
   all: ['tags'] as const,

@@ -3,19 +3,8 @@ import { request } from '@/hooks/api/request';
 import { boardKeys } from '@/hooks/api/use-board';
 import { MAX_PAGE_SIZE } from '@/shared/rules/paging';
 import type { ChangeUserInput, InviteUserInput } from '@/shared/schemas/team';
-import type { TeamMember, UndeliveredMail } from '@/shared/types/team';
+import type { AuditEntry, TeamMember, UndeliveredMail } from '@/shared/types/team';
 import type { ListResponse } from '@/shared/types/api';
-
-/** One line of `GET /api/audit`, as server/services/users.service.ts answers it. */
-export interface AuditEntry {
-  id: number;
-  type: string;
-  at: string;
-  userId: number | null;
-  actorId: number | null;
-  detail: Record<string, unknown> | null;
-  ip: string | null;
-}
 
 const teamKeys = {
   all: ['team'] as const,
