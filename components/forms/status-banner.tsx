@@ -13,7 +13,7 @@ export function StatusBanner({ status, word, testID = 'form-status' }: { status?
   const queued = status.code === 'queued';
   return (
     <View testID={testID}>
-      <Notice tone={queued ? 'info' : 'danger'} word={queued ? 'Waiting to send' : (word ?? WORDS[status.status] ?? 'Not done')}>{status.message}</Notice>
+      <Notice tone={queued ? 'info' : 'danger'} word={queued ? 'No signal' : (word ?? WORDS[status.status] ?? 'Not done')}>{status.message}</Notice>
     </View>
   );
 }

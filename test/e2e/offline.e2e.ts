@@ -134,6 +134,9 @@ describe('in a plant room with no signal, on a phone', () => {
     await page.getByTestId('reading-returnTemperatureC').fill('63');
     await page.getByTestId('readings-save').click();
     await page.getByTestId('readings-form').getByText(/waiting to send/i).waitFor();
+    // Queued is not a refusal: the form's banner says no signal, not "Not sent".
+    await expect(page.getByTestId('readings-form').getByText('No signal', { exact: true }).count()).resolves.toBe(1);
+    await expect(page.getByTestId('readings-form').getByText('Not sent', { exact: true }).count()).resolves.toBe(0);
     // A second tap on the still-open form is the same action, not a second set.
     await page.getByTestId('readings-save').click();
     await page.getByTestId('readings-cancel').click();
