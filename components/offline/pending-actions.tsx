@@ -8,6 +8,8 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
+import { deviceZone } from '@/components/places/zone';
+import { formatInZone } from '@/components/tags/tag-time';
 import { useSiteQuery } from '@/hooks/api/use-sites';
 import { useTagsQuery } from '@/hooks/api/use-tags';
 import { flushOutbox, outbox } from '@/hooks/offline/send-or-queue';
@@ -15,7 +17,8 @@ import { useOutboxEntries } from '@/hooks/offline/use-outbox';
 import type { OutboxEntry } from '@/hooks/offline/outbox-types';
 import type { Asset } from '@/shared/types/register';
 
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'short' });
+/** "Wed 2 Dec, 11:33" in the device's own zone: a month name, never a date that reads two ways. */
+const when = (iso: string) => formatInZone(iso, deviceZone());
 
 /** One action on this device: waiting to send, or refused by the server with its message. */
 function PendingEntry({ entry, actions }: { entry: OutboxEntry; actions: boolean }) {
