@@ -1,9 +1,10 @@
-import { Formik, useFormikContext } from 'formik';
+import { Formik } from 'formik';
 import { View } from 'react-native';
-import { colors, space } from '@/components/theme';
+import { space } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
 import { Text } from '@/components/ui/text';
-import { FormTextField } from '@/components/forms/bound-fields';
+import { FieldMessage, FormTextField, useBoundField } from '@/components/forms/bound-fields';
+import { FormCheckField } from '@/components/forms/check-field';
 import { FormButtons } from '@/components/forms/form-buttons';
 import { FormStatusBanner } from '@/components/forms/status-banner';
 import { submitForm } from '@/components/forms/submit';
@@ -16,20 +17,18 @@ type Values = Omit<ProcedureReviewInput, 'signedOff'> & { signedOff: boolean };
 
 /** The engineers watched using the procedure: everyone who can hold a tag, except the reviewer. */
 function ObservedPicker({ reviewerId }: { reviewerId: number }) {
-  const { values, setFieldValue, errors, submitCount } = useFormikContext<Values>();
+  const observed = useBoundField<number[]>('observedUserIds');
   const people = (useTagColleaguesQuery().data ?? []).filter((p) => p.id !== reviewerId);
-  const toggle = (id: number) =>
-    void setFieldValue('observedUserIds', values.observedUserIds.includes(id) ? values.observedUserIds.filter((x) => x !== id) : [...values.observedUserIds, id]);
-  const error = submitCount > 0 && typeof errors.observedUserIds === 'string' ? errors.observedUserIds : null;
+  const toggle = (id: number) => observed.set(observed.value.includes(id) ? observed.value.filter((x) => x !== id) : [...observed.value, id]);
   return (
     <View style={{ gap: space.xs }}>
       <Text variant="label" bold>Engineers observed using the procedure</Text>
       <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm }}>
         {people.map((p) => (
-          <Chip key={p.id} label={p.name} selected={values.observedUserIds.includes(p.id)} onPress={() => toggle(p.id)} testID={`review-observed-${p.id}`} />
+          <Chip key={p.id} label={p.name} selected={observed.value.includes(p.id)} onPress={() => toggle(p.id)} testID={`review-observed-${p.id}`} />
         ))}
       </View>
-      {error ? <Text variant="small" style={{ color: colors.danger }} testID="review-observed-error">{`⚠ ${error}`}</Text> : null}
+      <FieldMessage name="observedUserIds" testID="review-observed-error" />
     </View>
   );
 }
@@ -48,20 +47,14 @@ export function ProcedureReviewForm({ siteId, reviewerId, onDone }: { siteId: nu
         if (await submitForm(helpers, () => record.mutateAsync(procedureReviewSchema.cast(values) as ProcedureReviewInput))) onDone();
       }}
     >
-      {({ handleSubmit, isSubmitting, values, setFieldValue, errors, submitCount }) => (
+      {({ handleSubmit, isSubmitting }) => (
         <View style={{ gap: space.sm }} testID="review-form">
           <FormStatusBanner word="Not recorded" />
           <FormTextField name="reviewedOn" label="Date of the review (YYYY-MM-DD)" testID="review-date" autoCapitalize="none" />
           <ObservedPicker reviewerId={reviewerId} />
           <FormTextField name="deviations" label="Deviations from the procedure" hint='Write "None found" if there were none.' multiline numberOfLines={3} testID="review-deviations" />
           <FormTextField name="corrections" label="Corrections made" hint='Write "None needed" if there were none.' multiline numberOfLines={3} testID="review-corrections" />
-          <Chip
-            label="I observed this procedure in use and sign off this review"
-            selected={values.signedOff}
-            onPress={() => void setFieldValue('signedOff', !values.signedOff)}
-            testID="review-signed-off"
-          />
-          {submitCount > 0 && errors.signedOff ? <Text variant="small" style={{ color: colors.danger }}>{`⚠ ${errors.signedOff}`}</Text> : null}
+          <FormCheckField name="signedOff" label="I observed this procedure in use and sign off this review" testID="review-signed-off" />
           <FormButtons submitTitle="Record review" busy={isSubmitting} onSubmit={() => handleSubmit()} onCancel={onDone} testID="review" />
         </View>
       )}

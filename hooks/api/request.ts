@@ -75,3 +75,10 @@ export async function fetchBlob(url: string): Promise<Blob> {
 
 export const errorMessage = (err: unknown) =>
   err instanceof RequestError ? err.message : err instanceof Error ? err.message : 'Something went wrong.';
+
+/** A CSV file posted to an import route: a dry run only checks it, `dryRun: false` writes. */
+export function postCsvImport<R>(path: string, { file, dryRun }: { file: Blob; dryRun: boolean }, fallbackName: string): Promise<R> {
+  const form = new FormData();
+  form.append('file', file, file instanceof File ? file.name : fallbackName);
+  return request<R>(`${path}?dryRun=${dryRun}`, { method: 'POST', body: form });
+}

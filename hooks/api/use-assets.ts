@@ -1,6 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ImagePickerAsset } from 'expo-image-picker';
-import { fetchBlob, request } from '@/hooks/api/request';
+import { fetchBlob, postCsvImport, request } from '@/hooks/api/request';
 import { sendOrQueue } from '@/hooks/offline/send-or-queue';
 import { assetCopyOr, offlineAssetCopy } from '@/hooks/offline/visited-items';
 import { plantRoomKeys } from '@/hooks/api/use-plant-rooms';
@@ -118,11 +118,7 @@ export function useExportAssetsMutation() {
 export function useImportAssetsMutation() {
   const invalidate = useInvalidateRegister();
   return useMutation({
-    mutationFn: ({ file, dryRun }: { file: Blob; dryRun: boolean }) => {
-      const form = new FormData();
-      form.append('file', file, file instanceof File ? file.name : 'register.csv');
-      return request<ImportResult>(`/assets/import?dryRun=${dryRun}`, { method: 'POST', body: form });
-    },
+    mutationFn: (input: { file: Blob; dryRun: boolean }) => postCsvImport<ImportResult>('/assets/import', input, 'register.csv'),
     onSuccess: async (result) => { if (!result.dryRun) await invalidate(); },
   });
 }

@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { fetchBlob, request } from '@/hooks/api/request';
+import { fetchBlob, postCsvImport, request } from '@/hooks/api/request';
 import type { EnergySource } from '@/shared/rules/register';
 import type { ConnectionInput } from '@/shared/schemas/connections';
 import type { AssetConnections, ClosingAffects, Connection, ConnectionImportResult, IsolationPlan, PlantRoomDiagram } from '@/shared/types/connections';
@@ -56,11 +56,7 @@ export function useExportConnectionsMutation() {
 export function useImportConnectionsMutation() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ file, dryRun }: { file: Blob; dryRun: boolean }) => {
-      const form = new FormData();
-      form.append('file', file, file instanceof File ? file.name : 'connections.csv');
-      return request<ConnectionImportResult>(`/connections/import?dryRun=${dryRun}`, { method: 'POST', body: form });
-    },
+    mutationFn: (input: { file: Blob; dryRun: boolean }) => postCsvImport<ConnectionImportResult>('/connections/import', input, 'connections.csv'),
     onSuccess: async (result) => { if (!result.dryRun) await qc.invalidateQueries({ queryKey: connectionKeys.all }); },
   });
 }
